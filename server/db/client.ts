@@ -1,0 +1,18 @@
+import pg from 'pg';
+import { drizzle, type NodePgDatabase } from 'drizzle-orm/node-postgres';
+import * as schema from './schema';
+
+export type Db = NodePgDatabase<typeof schema>;
+
+export interface Database {
+  pool: pg.Pool;
+  db: Db;
+  close(): Promise<void>;
+}
+
+/** Opens a connection pool; errors on idle clients are logged, not fatal (PostgreSQL may restart). */
+export function openDatabase(url: string, max = 10): Database {
+  const pool = new pg.Pool({ connectionString: url, max, connectionTimeoutMillis: 5000 });
+  pool.on('error', (err) => console.error(`database: idle client error: ${err.message}`));
+  return { pool, db: drizzle(pool, { schema }), close: () => pool.end() };
+}

@@ -1,0 +1,52 @@
+import http from 'node:http';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { ConfigError, loadConfig } from './config';
+import { openDatabase } from './db/client';
+import { createApp } from './app';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+
+function exitWith(what: string, todo: string): never {
+  process.stderr.write(`\ntapline: ${what}\n  What to do: ${todo}\n\n`);
+  process.exit(1);
+}
+
+async function main(): Promise<void> {
+  let config;
+  try {
+    config = loadConfig();
+  } catch (err) {
+    if (err instanceof ConfigError) exitWith(err.message, 'Fix the environment variables listed above (see README, "Configuration").');
+    throw err;
+  }
+  const database = openDatabase(config.DATABASE_URL);
+  try {
+    await database.pool.query('select 1');
+  } catch (err) {
+    exitWith(`Cannot reach the database at ${redact(config.DATABASE_URL)}: ${(err as Error).message}`,
+      'Check that PostgreSQL runs and DATABASE_URL is right, or unset DATABASE_URL to let `npm start` run a local one.');
+  }
+  const app = createApp({ config, database, staticDir: config.TAPLINE_STATIC_DIR ?? path.join(root, 'dist') });
+  const server = http.createServer(app);
+  server.on('error', (err: NodeJS.ErrnoException) => {
+    if (err.code === 'EADDRINUSE') exitWith(`Port ${config.PORT} is already in use.`, 'Stop the program using it, or start with another port: PORT=5180 npm start');
+    exitWith(`The server could not listen: ${err.message}`, 'Check HOST and PORT.');
+  });
+  server.listen(config.PORT, config.HOST, () => {
+    console.log(`tapline: serving on http://${config.HOST === '0.0.0.0' ? 'localhost' : config.HOST}:${config.PORT}`);
+  });
+  const stop = () => {
+    server.close();
+    server.closeAllConnections();
+    void database.close().finally(() => process.exit(0));
+  };
+  process.on('SIGINT', stop);
+  process.on('SIGTERM', stop);
+}
+
+function redact(url: string): string {
+  return url.replace(/\/\/([^:@/]+):[^@/]*@/, '//$1:***@');
+}
+
+void main();
