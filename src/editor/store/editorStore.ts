@@ -1,0 +1,179 @@
+// The editor store: one document (the sheet), its session state, and the only path by which the
+// document changes. Every local change goes through `applyLocal`, which records immer patches for
+// undo and hands them to listeners (the co-editing layer sends them on); `applyRemote` applies
+// someone else's patches without touching the local undo stack.
+import { applyPatches, enablePatches, produceWithPatches, type Draft, type Patch } from 'immer';
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import { immer } from 'zustand/middleware/immer';
+import type { Sheet } from '../../../shared/sheet';
+import { initialSession, type DocumentState, type PresenceState, type SessionState } from '../model/scopes';
+import { UndoHistory } from './history';
+import { ensureWireIds } from './normalize';
+
+enablePatches();
+
+export type PatchOrigin = 'local' | 'undo' | 'redo' | 'remote';
+
+/** One document change, as the co-editing layer sees it. */
+export interface PatchBatch {
+  origin: PatchOrigin;
+  label: string;
+  patches: Patch[];
+  inversePatches: Patch[];
+}
+
+export type DocRecipe = (draft: Draft<DocumentState>) => void;
+
+export interface HistoryState {
+  canUndo: boolean;
+  canRedo: boolean;
+  undoLabel?: string;
+  redoLabel?: string;
+}
+
+export interface EditorState {
+  doc: DocumentState;
+  /** bumps on every document change (cheap dependency for effects) */
+  docRevision: number;
+  session: SessionState;
+  presence: PresenceState;
+  history: HistoryState;
+}
+
+export interface EditorStore {
+  /** the zustand store, for React (`useStore(editor.store, selector)`) and tests */
+  readonly store: StoreApi<EditorState>;
+  getDoc(): DocumentState;
+  getSession(): SessionState;
+  /**
+   * Change the document. Returns the batch (also sent to every patch listener), or null when the
+   * recipe changed nothing or the sheet is read-only. Inside a gesture the change joins the open
+   * undo step.
+   */
+  applyLocal(recipe: DocRecipe, label?: string): PatchBatch | null;
+  /** Apply patches made elsewhere (another editor). They never enter the local undo stack. */
+  applyRemote(patches: Patch[], label?: string): void;
+  /** Listen to every document change; returns an unsubscribe function. */
+  subscribePatches(listener: (batch: PatchBatch) => void): () => void;
+  undo(): boolean;
+  redo(): boolean;
+  /** Fold the following changes into one undo step (a drag, a slider pull) until `endGesture`. */
+  beginGesture(label: string): void;
+  endGesture(): void;
+  /** Replace the document (opening a sheet): clears undo and the session's selection. */
+  loadDocument(sheet: Sheet, options?: { readOnly?: boolean }): void;
+  updateSession(recipe: (draft: Draft<SessionState>) => void): void;
+}
+
+/** Make a fresh editor store; the page makes one per open sheet, tests make one per test. */
+export function createEditorStore(initial: Sheet): EditorStore {
+  const history = new UndoHistory();
+  const listeners = new Set<(b: PatchBatch) => void>();
+  const store = createStore<EditorState>()(
+    immer(() => ({
+      doc: ensureWireIds(initial),
+      docRevision: 0,
+      session: initialSession(),
+      presence: { peers: {} },
+      history: { canUndo: false, canRedo: false },
+    })),
+  );
+
+  const historyState = (): HistoryState => {
+    const d = history.depth;
+    return { canUndo: d.past > 0, canRedo: d.future > 0, undoLabel: history.undoLabel, redoLabel: history.redoLabel };
+  };
+
+  /** Set the new document and drop session references to parts/wires that no longer exist. */
+  const commitDoc = (next: DocumentState) => {
+    store.setState((s) => {
+      s.doc = next as Draft<DocumentState>;
+      s.docRevision += 1;
+      s.history = historyState();
+      const partIds = new Set(next.parts.map((p) => p.id));
+      const wireIds = new Set(next.wires.map((w) => w.id));
+      s.session.selection.parts = s.session.selection.parts.filter((id) => partIds.has(id));
+      s.session.selection.wires = s.session.selection.wires.filter((id) => wireIds.has(id));
+      for (const id of Object.keys(s.session.corners)) if (!partIds.has(id)) delete s.session.corners[id];
+    });
+  };
+
+  const emit = (batch: PatchBatch) => {
+    for (const l of [...listeners]) l(batch);
+  };
+
+  const api: EditorStore = {
+    store,
+    getDoc: () => store.getState().doc,
+    getSession: () => store.getState().session,
+
+    applyLocal(recipe, label = 'Edit') {
+      if (store.getState().session.readOnly) return null;
+      const [next, patches, inversePatches] = produceWithPatches(store.getState().doc, recipe);
+      if (!patches.length) return null;
+      history.record(label, patches, inversePatches);
+      commitDoc(next);
+      const batch: PatchBatch = { origin: 'local', label, patches, inversePatches };
+      emit(batch);
+      return batch;
+    },
+
+    applyRemote(patches, label = 'Remote edit') {
+      if (!patches.length) return;
+      // The inverse is not needed for undo (remote steps are not ours to undo) but listeners may log it.
+      const [next, , inversePatches] = produceWithPatches(store.getState().doc, (d) => applyPatches(d, patches));
+      commitDoc(next);
+      emit({ origin: 'remote', label, patches, inversePatches });
+    },
+
+    subscribePatches(listener) {
+      listeners.add(listener);
+      return () => listeners.delete(listener);
+    },
+
+    undo() {
+      if (store.getState().session.readOnly) return false;
+      const entry = history.takeUndo();
+      if (!entry) {
+        store.setState((s) => void (s.history = historyState()));
+        return false;
+      }
+      commitDoc(applyPatches(store.getState().doc, entry.inversePatches));
+      emit({ origin: 'undo', label: entry.label, patches: entry.inversePatches, inversePatches: entry.patches });
+      return true;
+    },
+
+    redo() {
+      if (store.getState().session.readOnly) return false;
+      const entry = history.takeRedo();
+      if (!entry) return false;
+      commitDoc(applyPatches(store.getState().doc, entry.patches));
+      emit({ origin: 'redo', label: entry.label, patches: entry.patches, inversePatches: entry.inversePatches });
+      return true;
+    },
+
+    beginGesture(label) {
+      history.begin(label);
+    },
+
+    endGesture() {
+      history.end();
+      store.setState((s) => void (s.history = historyState()));
+    },
+
+    loadDocument(sheet, options = {}) {
+      history.clear();
+      store.setState((s) => {
+        s.doc = ensureWireIds(sheet) as Draft<DocumentState>;
+        s.docRevision += 1;
+        s.history = historyState();
+        s.session = { ...initialSession(), symbolStyle: s.session.symbolStyle, snapSeries: s.session.snapSeries, readOnly: !!options.readOnly } as Draft<SessionState>;
+      });
+    },
+
+    updateSession(recipe) {
+      store.setState((s) => recipe(s.session));
+    },
+  };
+  return api;
+}
