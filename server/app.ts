@@ -1,9 +1,17 @@
 import express, { type Express } from 'express';
-import type { Config } from './config';
+import { usesRealOAuth, type Config } from './config';
 import type { Database } from './db/client';
 import { healthRouter } from './routes/health';
 import { errorHandler, notFoundApi } from './http-errors';
 import { mountClient } from './static';
+import { createSessions } from './auth/session';
+import { createPassport } from './auth/passport';
+import { createStrategyFactory } from './auth/strategy';
+import { authRouter, meRouter } from './auth/routes';
+import { fakeProviderRouter } from './auth/fake-provider/routes';
+import { createCsrf } from './security/csrf';
+import { securityHeaders } from './security/headers';
+import { signInLimiter } from './security/rate-limits';
 
 export interface AppDeps {
   config: Config;
@@ -12,14 +20,33 @@ export interface AppDeps {
   staticDir?: string;
 }
 
+/** Largest JSON body the API reads; a sheet of a few hundred parts is well under 100 kB. */
+export const JSON_LIMIT = '1mb';
+
 /** Builds the Express app without listening, so tests can drive it with supertest. */
 export function createApp(deps: AppDeps): Express {
+  const { config, database } = deps;
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(express.json({ limit: '2mb' }));
+  app.use(securityHeaders(config));
 
-  app.use('/api', healthRouter(deps.database));
+  app.use('/api', healthRouter(database));
+  if (!usesRealOAuth(config)) app.use('/fake-oauth', fakeProviderRouter());
+
+  const sessions = createSessions(config, database);
+  const passport = createPassport(database.db);
+  const csrf = createCsrf();
+  app.use(sessions.middleware);
+  app.use(passport.initialize());
+  app.use(passport.session());
+  app.use(express.json({ limit: JSON_LIMIT }));
+
+  app.use('/auth/logout', csrf.protect);
+  app.use('/auth', authRouter({ config, passport, strategyFor: createStrategyFactory(config, database.db), signInLimiter: signInLimiter(config) }));
+  app.use('/api', csrf.tokenRouter);
+  app.use('/api', csrf.protect);
+  app.use('/api', meRouter(config));
   app.use('/api', notFoundApi);
 
   if (deps.staticDir) mountClient(app, deps.staticDir);
