@@ -1,0 +1,620 @@
+// Compiling a sheet for repeated operating-point solves: parse and net extraction happen once;
+// each solve may override numeric params and conditions, and may warm-start from a previous result.
+import { partCatalog, type PartDefinition } from '../parts/index';
+import { fmt } from '../parts/model-helpers';
+import { paramProblem, parseSheet, type SheetIssue } from '../sheet/parse';
+import { extractNets, type NetList } from '../sheet/nets';
+import { pinKey, type Conditions, type Part, type Sheet } from '../sheet/schema';
+import { celsiusToKelvin, thermalVoltage } from './constants';
+import { GROUND, type Device, type DeviceEnv, type TopologyEdge } from './device';
+import { createLinearSystem, type LinearSolverKind, type LinearSystem } from './linear/index';
+import { MnaCircuit, deviceMovement, UNKNOWN_BRANCH, UNKNOWN_NODE, type NewtonOutcome, type NewtonRun } from './newton';
+import { failure, type PartResult, type SolveErrorInfo, type SolveFailure, type SolveResult, type SolveStrategy, type SolveSuccess, type SolveWarning } from './result';
+import { checkTopology, type PartTopology } from './topology';
+
+export interface SolveOptions {
+  /** relative tolerance on Newton steps and KCL residuals (default 1e-6) */
+  reltol?: number;
+  /** absolute voltage tolerance, V (default 1e-9) */
+  vntol?: number;
+  /** absolute current tolerance, A (default 1e-14) */
+  abstol?: number;
+  /** conductance across every pn junction while iterating, S (default 1e-12); the result is then polished without it */
+  gmin?: number;
+  /** iterations of one Newton run (default 150) */
+  maxIterations?: number;
+  /** bound on all Newton iterations of one solve, stepping included (default 3000) */
+  maxTotalIterations?: number;
+  /** try gmin stepping when plain Newton fails (default true) */
+  gminStepping?: boolean;
+  /** try source stepping when gmin stepping fails (default true) */
+  sourceStepping?: boolean;
+  /** 'auto' (dense up to 150 unknowns, band LU above), 'dense' or 'band' */
+  linearSolver?: LinearSolverKind;
+}
+
+export type ParamOverrides = Record<string, Record<string, number | boolean>>;
+
+export interface CircuitSolveOptions {
+  /** partId → param → value, applied on top of the sheet's params for this solve only */
+  paramOverrides?: ParamOverrides;
+  /** conditions for this solve only */
+  conditions?: Partial<Pick<Conditions, 'temperatureC' | 'illuminanceLux'>>;
+  /**
+   * Warm start: 'previous' (this circuit's last converged solution), an earlier result of this
+   * circuit (exact state), or net voltages by name.
+   */
+  initialGuess?: 'previous' | SolveSuccess | Record<string, number>;
+}
+
+export interface CompiledCircuit {
+  /** the validated sheet (defaults filled) — undefined when the sheet was invalid */
+  readonly sheet: Sheet | undefined;
+  readonly netList: NetList | undefined;
+  /** a failure that no param override can fix (invalid sheet, no ground) — solve() returns it */
+  readonly error: SolveFailure | null;
+  /** unknowns in the base MNA system (nodes + internal nodes + branch currents) */
+  readonly unknowns: number;
+  readonly linearSolverName: string;
+  solve(opts?: CircuitSolveOptions): SolveResult;
+}
+
+const DEFAULTS = {
+  reltol: 1e-6,
+  vntol: 1e-9,
+  abstol: 1e-14,
+  gmin: 1e-12,
+  maxIterations: 150,
+  maxTotalIterations: 3000,
+  gminStepping: true,
+  sourceStepping: true,
+  linearSolver: 'auto' as LinearSolverKind,
+};
+
+interface Instance {
+  devices: Device[];
+  /** device per part id (excluded parts and connectors have none) */
+  deviceById: Map<string, Device>;
+  kinds: Uint8Array;
+  circuit: MnaCircuit;
+  signature: string;
+}
+
+interface BaseInfo {
+  sheet: Sheet;
+  nets: NetList;
+  /** unknown index per net (GROUND for ground and inactive nets) */
+  netUnknown: Int32Array;
+  active: boolean[];
+  /** parts in the solve (not isolated), in sheet order */
+  solved: Part[];
+  excluded: Set<string>;
+  staticWarnings: SolveWarning[];
+  /** unknowns that are net voltages (they come first) */
+  externalCount: number;
+}
+
+function envFor(part: Part, params: Record<string, unknown>, cond: { temperatureC: number; illuminanceLux: number }): DeviceEnv {
+  void part;
+  const tC = typeof params.temperatureC === 'number' ? params.temperatureC : cond.temperatureC;
+  const lux = typeof params.illuminanceLux === 'number' ? params.illuminanceLux : cond.illuminanceLux;
+  const tK = celsiusToKelvin(tC);
+  return { temperatureC: tC, temperatureK: tK, vt: thermalVoltage(tK), illuminanceLux: lux };
+}
+
+function valueText(part: Part, params: Record<string, unknown>): string | undefined {
+  switch (part.type) {
+    case 'dc_voltage_source':
+      return fmt(params.voltage as number, 'V');
+    case 'switch':
+      return 'closed, 0 Ω';
+    case 'potentiometer':
+      return `wiper at ${(params.position as number) <= 0 ? 'a' : 'b'}, 0 Ω`;
+    default:
+      return undefined;
+  }
+}
+
+function buildBase(sheet: Sheet): BaseInfo {
+  const nets = extractNets(sheet);
+  const staticWarnings: SolveWarning[] = [];
+  for (const n of nets.notices) staticWarnings.push({ code: n.code, severity: 'caution', net: n.net, message: n.message });
+
+  // parts with nothing connected to any pin are left out of the solve (with a warning)
+  const excluded = new Set<string>();
+  for (const part of sheet.parts) {
+    if (part.type === 'ground' || part.type === 'net_label') continue;
+    const def = partCatalog[part.type];
+    const own = def.pins.map((p) => pinKey(part.id, p.name));
+    const isolated = own.every((k) => nets.nets[nets.pinToIndex.get(k)!].pins.every((q) => q.startsWith(part.id + '.') && own.includes(q)));
+    if (isolated) {
+      excluded.add(part.id);
+      staticWarnings.push({
+        code: 'part_unconnected',
+        severity: 'warning',
+        partId: part.id,
+        message: `${part.id} (${def.label.toLowerCase()}) is not connected to anything and was left out of the solve. Wire it up or delete it.`,
+      });
+    }
+  }
+  const byId = new Map(sheet.parts.map((p) => [p.id, p] as const));
+  const active = nets.nets.map((n) =>
+    n.isGround ||
+    n.pins.some((k) => {
+      const id = k.slice(0, k.indexOf('.'));
+      const part = byId.get(id);
+      return !excluded.has(id) && part !== undefined && part.type !== 'ground' && part.type !== 'net_label';
+    }),
+  );
+  // unconnected pins of parts that are in the solve
+  for (const part of sheet.parts) {
+    if (excluded.has(part.id) || part.type === 'ground' || part.type === 'net_label') continue;
+    const def = partCatalog[part.type];
+    for (const pin of def.pins) {
+      const k = pinKey(part.id, pin.name);
+      const net = nets.nets[nets.pinToIndex.get(k)!];
+      if (net.pins.length === 1 && !net.isGround)
+        staticWarnings.push({
+          code: 'unconnected_pin',
+          severity: 'warning',
+          partId: part.id,
+          net: net.name,
+          message: `Pin "${pin.name}" (${pin.label}) of ${part.id} is not connected to anything.`,
+        });
+    }
+  }
+  const netUnknown = new Int32Array(nets.nets.length).fill(GROUND);
+  let k = 0;
+  nets.nets.forEach((n, i) => {
+    if (!n.isGround && active[i]) netUnknown[i] = k++;
+  });
+  const solved = sheet.parts.filter((p) => !excluded.has(p.id));
+  // unknown params (kept in the file, ignored by the solver)
+  for (const part of solved) {
+    const def = partCatalog[part.type];
+    for (const key of Object.keys(part.params ?? {}))
+      if (!def.params.some((p) => p.name === key))
+        staticWarnings.push({
+          code: 'unknown_param',
+          severity: 'caution',
+          partId: part.id,
+          message: `${part.id} (${part.type}) has a param "${key}" that Tapline does not know; it is ignored. Known params: ${def.params.map((p) => p.name).join(', ') || 'none'}.`,
+        });
+  }
+  return { sheet, nets, netUnknown, active, solved, excluded, staticWarnings, externalCount: k };
+}
+
+function instantiate(
+  base: BaseInfo,
+  paramsOf: (p: Part) => Record<string, unknown>,
+  cond: { temperatureC: number; illuminanceLux: number },
+  opts: typeof DEFAULTS,
+  reuse: { system: LinearSystem; signature: string } | null,
+): { ok: true; inst: Instance } | { ok: false; error: SolveErrorInfo } {
+  const { nets, netUnknown } = base;
+  // physical checks and topology
+  const issues: SheetIssue[] = [];
+  const topo: PartTopology[] = [];
+  const envs = new Map<string, DeviceEnv>();
+  for (const part of base.solved) {
+    const def: PartDefinition = partCatalog[part.type];
+    const params = paramsOf(part);
+    const env = envFor(part, params, cond);
+    envs.set(part.id, env);
+    for (const [field, msg] of def.model.check?.(params, env) ?? [])
+      issues.push({ path: `parts.${part.id}.params.${field}`, partId: part.id, field, message: `Part "${part.id}" (${part.type}): field "${field}" ${msg}.` });
+    const pinNets = def.pins.map((p) => nets.pinToIndex.get(pinKey(part.id, p.name))!);
+    const edges: TopologyEdge[] = def.model.topology(params, env);
+    const vt = valueText(part, params);
+    topo.push({ partId: part.id, type: part.type, pinNets, edges, ...(vt ? { valueText: vt } : {}) });
+  }
+  if (issues.length)
+    return {
+      ok: false,
+      error: {
+        code: 'invalid_parameter',
+        message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message,
+        parts: [...new Set(issues.map((i) => i.partId!))],
+        nets: [],
+        issues,
+      },
+    };
+  const topoError = checkTopology({
+    netNames: nets.nets.map((n) => n.name),
+    netPins: nets.nets.map((n) => n.pins),
+    groundIndex: nets.groundIndex,
+    active: base.active,
+    parts: topo,
+  });
+  if (topoError) return { ok: false, error: topoError };
+
+  // devices and unknowns
+  const kinds: number[] = [];
+  for (let i = 0; i < netUnknown.length; i++) if (netUnknown[i] !== GROUND) kinds.push(UNKNOWN_NODE);
+  const names: string[] = [];
+  const alloc = {
+    internalNode(name: string) {
+      kinds.push(UNKNOWN_NODE);
+      names.push('n:' + name);
+      return kinds.length - 1;
+    },
+    branch(name: string) {
+      kinds.push(UNKNOWN_BRANCH);
+      names.push('b:' + name);
+      return kinds.length - 1;
+    },
+  };
+  const devices: Device[] = [];
+  const deviceById = new Map<string, Device>();
+  for (const part of base.solved) {
+    if (part.type === 'ground' || part.type === 'net_label') continue;
+    const def = partCatalog[part.type];
+    const pins = def.pins.map((p) => netUnknown[nets.pinToIndex.get(pinKey(part.id, p.name))!]);
+    const dev = def.model.create({ partId: part.id, params: paramsOf(part), env: envs.get(part.id)!, pins, alloc });
+    devices.push(dev);
+    deviceById.set(part.id, dev);
+  }
+  const kindArr = Uint8Array.from(kinds);
+  const size = kindArr.length;
+  // the structure signature decides whether a linear system can be reused
+  const probe = new MnaCircuit(size, kindArr, devices, { size, solverName: '', clear() {}, add() {}, addRhs() {}, solve: () => new Float64Array(0) }, opts);
+  const pattern = probe.pattern();
+  let h = 0;
+  for (const [r, c] of pattern) h = (Math.imul(h, 31) + r * 7919 + c) | 0;
+  const signature = `${size}:${names.join(',')}:${pattern.length}:${h}`;
+  const system = reuse && reuse.signature === signature ? reuse.system : createLinearSystem(opts.linearSolver, size, pattern);
+  const circuit = new MnaCircuit(size, kindArr, devices, system, opts);
+  return { ok: true, inst: { devices, deviceById, kinds: kindArr, circuit, signature } };
+}
+
+const results = new WeakMap<object, Float64Array>();
+
+export function compileCircuit(input: Sheet | unknown, options: SolveOptions = {}): CompiledCircuit {
+  const opts = { ...DEFAULTS, ...stripUndefined(options) };
+  try {
+    return compileInner(input, opts);
+  } catch (e) {
+    const err = failure({ code: 'internal_error', message: `The solver hit an internal error: ${e instanceof Error ? e.message : String(e)}. Please report this sheet.`, parts: [], nets: [] });
+    return { sheet: undefined, netList: undefined, error: err, unknowns: 0, linearSolverName: '', solve: () => err };
+  }
+}
+
+function stripUndefined<T extends object>(o: T): Partial<T> {
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
+}
+
+function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
+  const parsed = parseSheet(input);
+  if (!parsed.ok) {
+    const err = failure({
+      code: 'invalid_sheet',
+      message: parsed.error.message,
+      parts: [...new Set(parsed.error.issues.map((i) => i.partId).filter((x): x is string => !!x))],
+      nets: [],
+      issues: parsed.error.issues,
+    });
+    return { sheet: undefined, netList: undefined, error: err, unknowns: 0, linearSolverName: '', solve: () => err };
+  }
+  const sheet = parsed.sheet;
+  const base = buildBase(sheet);
+  const baseCond = { temperatureC: sheet.conditions.temperatureC, illuminanceLux: sheet.conditions.illuminanceLux };
+  if (base.nets.groundIndex < 0) {
+    const info = checkTopology({ netNames: [], netPins: [], groundIndex: -1, active: [], parts: [] })!;
+    const err = failure(info, base.staticWarnings);
+    return { sheet, netList: base.nets, error: err, unknowns: 0, linearSolverName: '', solve: () => err };
+  }
+  const baseInst = instantiate(base, (p) => p.params as Record<string, unknown>, baseCond, opts, null);
+  let lastSystem: { system: LinearSystem; signature: string } | null = baseInst.ok ? { system: baseInst.inst.circuit.system, signature: baseInst.inst.signature } : null;
+  let lastX: Float64Array | null = null;
+  let lastSignature = '';
+
+  const solve = (so: CircuitSolveOptions = {}): SolveResult => {
+    try {
+      const cond = { ...baseCond, ...stripUndefined(so.conditions ?? {}) };
+      for (const [k, v] of [['temperatureC', cond.temperatureC], ['illuminanceLux', cond.illuminanceLux]] as const) {
+        const bad = k === 'temperatureC' ? !(Number.isFinite(v) && v > -273.15) : !(Number.isFinite(v) && v >= 0);
+        if (bad)
+          return failure({ code: 'invalid_parameter', message: `conditions.${k} must be ${k === 'temperatureC' ? 'a temperature above −273.15 °C' : 'zero or more lux'} (got ${v}).`, parts: [], nets: [] }, base.staticWarnings);
+      }
+      let inst: Instance;
+      const overrides = so.paramOverrides;
+      const hasOverrides = overrides && Object.keys(overrides).length > 0;
+      const condChanged = cond.temperatureC !== baseCond.temperatureC || cond.illuminanceLux !== baseCond.illuminanceLux;
+      if (!hasOverrides && !condChanged) {
+        if (!baseInst.ok) return failure(baseInst.error, base.staticWarnings);
+        inst = baseInst.inst;
+      } else {
+        const merged = new Map<string, Record<string, unknown>>();
+        if (hasOverrides) {
+          const issues: SheetIssue[] = [];
+          for (const [id, ov] of Object.entries(overrides!)) {
+            const part = sheet.parts.find((p) => p.id === id);
+            if (!part) {
+              issues.push({ path: `paramOverrides.${id}`, partId: id, message: `paramOverrides: there is no part "${id}" on the sheet.` });
+              continue;
+            }
+            const def = partCatalog[part.type];
+            const params = { ...(part.params as Record<string, unknown>), ...ov };
+            for (const key of Object.keys(ov)) {
+              const info = def.params.find((p) => p.name === key);
+              if (!info) {
+                issues.push({ path: `paramOverrides.${id}.${key}`, partId: id, field: key, message: `Part "${id}" (${part.type}): there is no param "${key}" to override.` });
+                continue;
+              }
+              const prob = paramProblem(info, params[key]);
+              if (prob) issues.push({ path: `paramOverrides.${id}.${key}`, partId: id, field: key, message: `Part "${id}" (${part.type}): field "${key}" ${prob}.` });
+            }
+            for (const [field, msg] of def.crossCheck?.(params) ?? [])
+              issues.push({ path: `paramOverrides.${id}.${field}`, partId: id, field, message: `Part "${id}" (${part.type}): field "${field}" ${msg}.` });
+            merged.set(id, params);
+          }
+          if (issues.length)
+            return failure(
+              { code: 'invalid_parameter', message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message, parts: [...new Set(issues.map((i) => i.partId!).filter(Boolean))], nets: [], issues },
+              base.staticWarnings,
+            );
+        }
+        const r = instantiate(base, (p) => merged.get(p.id) ?? (p.params as Record<string, unknown>), cond, opts, lastSystem);
+        if (!r.ok) return failure(r.error, base.staticWarnings);
+        inst = r.inst;
+        lastSystem = { system: inst.circuit.system, signature: inst.signature };
+      }
+
+      // initial guess
+      const n = inst.circuit.size;
+      let x0 = new Float64Array(n);
+      const g = so.initialGuess;
+      if (g === 'previous') {
+        if (lastX && lastSignature === inst.signature) x0 = lastX.slice();
+      } else if (g && typeof g === 'object') {
+        const exact = results.get(g);
+        if (exact && exact.length === n && (g as SolveSuccess).ok === true && lastSignature === inst.signature) x0 = exact.slice();
+        else {
+          const byName = (g as SolveSuccess).ok === true ? (g as SolveSuccess).nets : (g as Record<string, number>);
+          base.nets.nets.forEach((net, i) => {
+            const u = base.netUnknown[i];
+            const v = byName[net.name];
+            if (u >= 0 && typeof v === 'number' && Number.isFinite(v)) x0[u] = v;
+          });
+          // internal nodes: start at the voltage of the part's first pin
+          const external = base.externalCount;
+          for (const d of inst.devices)
+            for (const node of d.nodes) if (node >= external && inst.kinds[node] === UNKNOWN_NODE && d.nodes[0] < external) x0[node] = x0[d.nodes[0]];
+        }
+      }
+
+      const outcome = runStrategies(inst.circuit, x0, opts);
+      if (!outcome.ok) return failure(describeFailure(outcome, inst, base), base.staticWarnings);
+      const res = assemble(base, inst, outcome.x, outcome.gminUsed, cond, outcome.iterations, outcome.strategy);
+      if (res.ok) {
+        lastX = outcome.x;
+        lastSignature = inst.signature;
+        results.set(res, outcome.x);
+      }
+      return res;
+    } catch (e) {
+      return failure({ code: 'internal_error', message: `The solver hit an internal error: ${e instanceof Error ? e.message : String(e)}. Please report this sheet.`, parts: [], nets: [] }, base.staticWarnings);
+    }
+  };
+
+  return {
+    sheet,
+    netList: base.nets,
+    error: null,
+    unknowns: baseInst.ok ? baseInst.inst.circuit.size : 0,
+    linearSolverName: baseInst.ok ? baseInst.inst.circuit.system.solverName : '',
+    solve,
+  };
+}
+
+interface StrategyOutcomeOk {
+  ok: true;
+  x: Float64Array;
+  iterations: number;
+  strategy: SolveStrategy;
+  gminUsed: number;
+}
+interface StrategyOutcomeFail {
+  ok: false;
+  iterations: number;
+  last: NewtonOutcome;
+  singular?: number[];
+  tried: string[];
+  exhausted: boolean;
+}
+
+function runStrategies(c: MnaCircuit, x0: Float64Array, opts: typeof DEFAULTS): StrategyOutcomeOk | StrategyOutcomeFail {
+  let total = 0;
+  const budgetLeft = () => opts.maxTotalIterations - total;
+  const run = (x: Float64Array, r: Omit<NewtonRun, 'maxIterations'>, maxIt = opts.maxIterations): NewtonOutcome => {
+    const out = c.newton(x, { ...r, maxIterations: Math.max(1, Math.min(maxIt, budgetLeft())) });
+    total += out.iterations;
+    return out;
+  };
+  const gmin = opts.gmin;
+  const tried: string[] = ['Newton–Raphson'];
+  const first = run(x0, { gmin, sourceScale: 1, shunt: 0 });
+  let best: NewtonOutcome = first;
+  let singular = first.singular;
+  const finish = (x: Float64Array, strategy: SolveStrategy): StrategyOutcomeOk => {
+    // polish without the junction gmin so results are those of the exact device equations
+    if (c.nonlinear && gmin > 0 && budgetLeft() > 0) {
+      const p = run(x, { gmin: 0, sourceScale: 1, shunt: 0 }, 30);
+      if (p.converged) return { ok: true, x: p.x, iterations: total, strategy, gminUsed: 0 };
+    }
+    return { ok: true, x, iterations: total, strategy, gminUsed: c.nonlinear ? gmin : 0 };
+  };
+  if (first.converged) return finish(first.x, c.nonlinear ? 'newton' : 'direct');
+  if (!c.nonlinear) return { ok: false, iterations: total, last: first, ...(singular ? { singular } : {}), tried, exhausted: false };
+
+  // gmin stepping: a shunt from every node to ground, reduced step by step
+  if (opts.gminStepping && budgetLeft() > 0) {
+    tried.push('gmin stepping');
+    let shunt = 1e-2;
+    let r = run(x0, { gmin, sourceScale: 1, shunt });
+    if (r.converged) {
+      let factor = 10;
+      while (shunt > 1e-13 && budgetLeft() > 0) {
+        const next = shunt / factor;
+        const t = run(r.x, { gmin, sourceScale: 1, shunt: next });
+        if (t.converged) {
+          r = t;
+          shunt = next;
+          factor = Math.min(factor * 2, 1e3);
+        } else {
+          factor = Math.sqrt(factor);
+          if (factor < 1.05) break;
+        }
+      }
+      if (shunt <= 1e-13) {
+        const f = run(r.x, { gmin, sourceScale: 1, shunt: 0 });
+        if (f.converged) return finish(f.x, 'gmin-stepping');
+        best = f;
+      }
+    } else if (r.singular) singular = r.singular;
+  }
+
+  // source stepping: ramp every independent source from 0 to its value
+  if (opts.sourceStepping && budgetLeft() > 0) {
+    tried.push('source stepping');
+    let lam = 0;
+    let r = run(new Float64Array(c.size), { gmin, sourceScale: 0, shunt: 0 });
+    if (r.converged) {
+      let step = 0.1;
+      while (lam < 1 && budgetLeft() > 0) {
+        const next = Math.min(1, lam + step);
+        const t = run(r.x, { gmin, sourceScale: next, shunt: 0 });
+        if (t.converged) {
+          r = t;
+          lam = next;
+          step = Math.min(step * 2, 0.5);
+        } else {
+          best = t;
+          step /= 4;
+          if (step < 1e-4) break;
+        }
+      }
+      if (lam >= 1) return finish(r.x, 'source-stepping');
+    }
+  }
+  return { ok: false, iterations: total, last: best, ...(singular ? { singular } : {}), tried, exhausted: budgetLeft() <= 0 };
+}
+
+function unknownName(base: BaseInfo, i: number): string | null {
+  for (let k = 0; k < base.netUnknown.length; k++) if (base.netUnknown[k] === i) return base.nets.nets[k].name;
+  return null;
+}
+
+function describeFailure(o: StrategyOutcomeFail, inst: Instance, base: BaseInfo): SolveErrorInfo {
+  if (o.singular && (!inst.circuit.nonlinear || o.last.singular)) {
+    const nets = o.singular.map((u) => unknownName(base, u)).filter((x): x is string => !!x);
+    const parts = new Set<string>();
+    for (const d of inst.devices) if (d.nodes.some((nd) => o.singular!.includes(nd))) parts.add(d.partId);
+    return {
+      code: 'singular_matrix',
+      message: `The circuit equations have no unique solution${nets.length ? ` at net${nets.length > 1 ? 's' : ''} ${nets.map((s) => `"${s}"`).join(', ')}` : ''}${parts.size ? ` (parts ${[...parts].join(', ')})` : ''}: a voltage or a source current there is not determined. Look for parts that only connect to each other, ideal sources or 0 Ω links in a loop, or an open switch isolating part of the circuit.`,
+      parts: [...parts],
+      nets,
+    };
+  }
+  const moves = deviceMovement(inst.devices, o.last.x, o.last.prev)
+    .filter((m) => m.change > 1e-9)
+    .sort((a, b) => b.change - a.change || a.partId.localeCompare(b.partId));
+  const nonlinearIds = new Set(inst.devices.filter((d) => d.nonlinear).map((d) => d.partId));
+  const moving = [...moves.filter((m) => nonlinearIds.has(m.partId)), ...moves.filter((m) => !nonlinearIds.has(m.partId))].slice(0, 6);
+  const netMoves: Array<{ net: string; change: number }> = [];
+  base.nets.nets.forEach((net, k) => {
+    const u = base.netUnknown[k];
+    if (u < 0) return;
+    const ch = Math.abs(o.last.x[u] - o.last.prev[u]);
+    if (ch > 1e-9) netMoves.push({ net: net.name, change: ch });
+  });
+  netMoves.sort((a, b) => b.change - a.change);
+  const parts = moving.length ? moving.map((m) => m.partId) : [...nonlinearIds];
+  const list = moving.length
+    ? moving.map((m) => `${m.partId} (its voltages changed by ${fmt(m.change, 'V')} in the last iteration)`).join(', ')
+    : [...nonlinearIds].join(', ');
+  return {
+    code: 'no_convergence',
+    message: `The operating point did not converge within ${o.iterations} iterations (tried ${o.tried.join(', ')}). Still moving: ${list}. Check for a constant-power load asking more than the supply can give, parts connected backwards, or extreme parameter values.`,
+    parts,
+    nets: netMoves.slice(0, 6).map((m) => m.net),
+  };
+}
+
+function assemble(
+  base: BaseInfo,
+  inst: Instance,
+  x: Float64Array,
+  gminUsed: number,
+  cond: { temperatureC: number; illuminanceLux: number },
+  iterations: number,
+  strategy: SolveStrategy,
+): SolveResult {
+  const nets: Record<string, number> = {};
+  base.nets.nets.forEach((net, i) => {
+    if (!base.active[i]) return;
+    const u = base.netUnknown[i];
+    nets[net.name] = u < 0 ? 0 : x[u] === 0 ? 0 : x[u];
+  });
+  const pins: Record<string, number> = {};
+  const parts: Record<string, PartResult> = {};
+  const warnings: SolveWarning[] = [...base.staticWarnings];
+  const bad: string[] = [];
+  for (const part of base.sheet.parts) {
+    const def = partCatalog[part.type];
+    const partWarnings: SolveWarning[] = base.staticWarnings.filter((w) => w.partId === part.id);
+    if (base.excluded.has(part.id)) {
+      parts[part.id] = { pinCurrents: Object.fromEntries(def.pins.map((p) => [p.name, 0])), power: 0, warnings: partWarnings };
+      continue;
+    }
+    const pv = def.pins.map((p) => {
+      const netIdx = base.nets.pinToIndex.get(pinKey(part.id, p.name))!;
+      const u = base.netUnknown[netIdx];
+      return u < 0 ? 0 : x[u];
+    });
+    def.pins.forEach((p, k) => (pins[pinKey(part.id, p.name)] = pv[k] === 0 ? 0 : pv[k]));
+    const dev = inst.deviceById.get(part.id);
+    const pi = dev ? dev.pinCurrents(x, gminUsed) : def.pins.map(() => 0);
+    let power = 0;
+    for (let k = 0; k < pi.length; k++) power += pv[k] * pi[k];
+    const rep = dev?.report?.(x, pv, pi);
+    for (const w of rep?.warnings ?? []) {
+      const sw: SolveWarning = { code: w.code, severity: w.severity, partId: part.id, message: w.message };
+      partWarnings.push(sw);
+      warnings.push(sw);
+    }
+    const pinCurrents = Object.fromEntries(def.pins.map((p, k) => [p.name, pi[k] === 0 ? 0 : pi[k]]));
+    if (!pi.every(Number.isFinite) || !Number.isFinite(power)) bad.push(part.id);
+    const derived = rep?.derived;
+    if (derived) for (const v of Object.values(derived)) if (typeof v === 'number' && !Number.isFinite(v)) bad.push(part.id);
+    parts[part.id] = { pinCurrents, power: power === 0 ? 0 : power, warnings: partWarnings, ...(derived ? { derived } : {}) };
+  }
+  const badNets = Object.entries(nets).filter(([, v]) => !Number.isFinite(v)).map(([k]) => k);
+  if (bad.length || badNets.length)
+    return failure(
+      {
+        code: 'non_finite',
+        message: `The solve produced a value that is not a finite number${bad.length ? ` for ${[...new Set(bad)].join(', ')}` : ''}${badNets.length ? ` at ${badNets.join(', ')}` : ''}. Check for extreme parameter values.`,
+        parts: [...new Set(bad)],
+        nets: badNets,
+      },
+      base.staticWarnings,
+    );
+  return {
+    ok: true,
+    analysis: 'operating-point',
+    nets,
+    pins,
+    parts,
+    warnings,
+    iterations,
+    strategy,
+    conditions: { temperatureC: cond.temperatureC, illuminanceLux: cond.illuminanceLux },
+  };
+}
+
+/** Solve the DC operating point of a sheet (validated here; never throws). */
+export function solveOperatingPoint(sheet: Sheet | unknown, options?: SolveOptions): SolveResult {
+  return compileCircuit(sheet, options).solve();
+}

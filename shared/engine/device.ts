@@ -1,0 +1,112 @@
+// What a device model gives the engine. A model turns one part (params already validated and
+// defaults filled) into a Device that stamps its linearised companion model into the MNA system
+// (Ho, Ruehli & Brennan, "The modified nodal approach to network analysis", IEEE Trans. Circuits
+// and Systems 22(6), 1975) and reports its pin currents.
+
+/** Unknown index of the reference (ground) node: never stamped. */
+export const GROUND = -1;
+
+export interface DeviceEnv {
+  temperatureC: number;
+  temperatureK: number;
+  /** thermal voltage k·T/q at temperatureK */
+  vt: number;
+  illuminanceLux: number;
+}
+
+/** Structural view of a part, for the topology diagnostics (pins by index). */
+export type TopologyEdge =
+  /** a DC path with some impedance (resistors, junctions, loads) */
+  | { kind: 'resistive'; a: number; b: number }
+  /** a zero-impedance voltage constraint v(a) − v(b) = value (ideal sources, 0 Ω links) */
+  | { kind: 'voltage'; a: number; b: number; value: number; source: boolean }
+  /** an ideal current source: no DC path */
+  | { kind: 'current'; a: number; b: number; value: number };
+
+export interface Allocator {
+  /** a new internal node (e.g. between a diode's junction and its series resistance) */
+  internalNode(name: string): number;
+  /** a new branch-current unknown (voltage sources, zero-ohm links) */
+  branch(name: string): number;
+}
+
+/** What a device writes to while loading. */
+export interface Stamper {
+  /** conductance g between nodes a and b (either may be GROUND) */
+  conductance(a: number, b: number, g: number): void;
+  /** raw matrix entry; ignored when row or col is GROUND */
+  add(row: number, col: number, value: number): void;
+  /** raw right-hand-side entry; ignored for GROUND */
+  addRhs(row: number, value: number): void;
+  /** a constant current `i` flowing INTO the device at node a and out at node b */
+  current(a: number, b: number, i: number): void;
+  /**
+   * A non-linear element, linearised: `currents[k]` flows into the device at `nodes[k]`;
+   * `controls[m] = [p, q, vLimited]` are the controlling voltages v(p) − v(q) at which the
+   * currents were evaluated, and `jac[k][m]` = ∂currents[k]/∂controls[m].
+   */
+  nonlinear(nodes: readonly number[], currents: readonly number[], controls: ReadonlyArray<readonly [number, number, number]>, jac: ReadonlyArray<readonly number[]>): void;
+  /** junction gmin in effect (S), to put in parallel with each pn junction */
+  readonly gmin: number;
+  /** scale (0..1) for independent sources, for source stepping */
+  readonly sourceScale: number;
+  /** set when a device limited a junction step this iteration (the iteration cannot be final) */
+  markLimited(): void;
+}
+
+/** Where a device adds its true (non-linearised) currents for the KCL residual. */
+export interface ResidualSink {
+  /** current `i` flowing from `node` into the device */
+  add(node: number, i: number): void;
+}
+
+export interface DeviceWarning {
+  code: string;
+  severity: 'caution' | 'warning' | 'danger';
+  message: string;
+}
+
+export interface DeviceReport {
+  /** derived operating quantities shown to users (e.g. resistance at temperature, region) */
+  derived?: Record<string, number | string>;
+  warnings?: DeviceWarning[];
+}
+
+export interface Device {
+  readonly partId: string;
+  readonly nonlinear: boolean;
+  /** every unknown node the device touches (pins and internal nodes), for movement reporting */
+  readonly nodes: readonly number[];
+  /** start of a Newton solve from x (resets junction-limiting memory) */
+  begin?(x: Float64Array): void;
+  /** stamp the companion model at iterate x */
+  load(s: Stamper, x: Float64Array): void;
+  /** add the true currents at x (with the given junction gmin and source scale) to the residual */
+  residual(x: Float64Array, sink: ResidualSink, gmin: number, sourceScale: number): void;
+  /** currents INTO each pin, in the part's pin order, at the solution x */
+  pinCurrents(x: Float64Array, gmin: number): number[];
+  /** operating-point report: derived values and warnings */
+  report?(x: Float64Array, pinVoltages: readonly number[], pinCurrents: readonly number[]): DeviceReport;
+}
+
+export interface DeviceContext<P> {
+  partId: string;
+  params: P;
+  env: DeviceEnv;
+  /** unknown index per pin, in pin order (GROUND for the reference net) */
+  pins: readonly number[];
+  alloc: Allocator;
+}
+
+export interface DeviceModel<P = Record<string, unknown>> {
+  /** Topology of the part with these params (pin indices), for the structural diagnostics. */
+  topology(params: P, env: DeviceEnv): TopologyEdge[];
+  /** Physical problems the schema cannot see (returns [field, message] pairs), e.g. an LED whose series resistance eats its forward voltage. */
+  check?(params: P, env: DeviceEnv): Array<[string, string]>;
+  create(ctx: DeviceContext<P>): Device;
+}
+
+/** Read v(node) from x, with ground at 0 V. */
+export function nodeV(x: Float64Array, node: number): number {
+  return node < 0 ? 0 : x[node];
+}

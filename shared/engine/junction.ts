@@ -1,0 +1,96 @@
+// pn-junction helpers: limited exponentials, the SPICE junction-voltage limiting (Nagel, "SPICE2: A
+// computer program to simulate semiconductor circuits", UCB/ERL M520, 1975, DEVpnjlim as in SPICE3
+// and ngspice) and the standard temperature scaling of saturation currents (as in SPICE;
+// Massobrio & Antognetti, "Semiconductor Device Modeling with SPICE", 2nd ed., 1993).
+import { NOMINAL_TEMPERATURE_K, thermalVoltage } from './constants';
+
+/** Above this exponent exp() continues linearly, so a wild Newton iterate cannot overflow. */
+export const EXP_LIMIT = 80;
+const EXP_AT_LIMIT = Math.exp(EXP_LIMIT);
+
+/** exp(u) for u ≤ EXP_LIMIT, continued linearly above (value and slope continuous). */
+export function limexp(u: number): number {
+  return u <= EXP_LIMIT ? Math.exp(u) : EXP_AT_LIMIT * (1 + u - EXP_LIMIT);
+}
+/** d/du limexp(u) */
+export function dlimexp(u: number): number {
+  return u <= EXP_LIMIT ? Math.exp(u) : EXP_AT_LIMIT;
+}
+
+/** Critical voltage of a junction: beyond it steps are limited logarithmically. */
+export function criticalVoltage(nvt: number, is: number): number {
+  return nvt * Math.log(nvt / (Math.SQRT2 * is));
+}
+
+/**
+ * Junction-voltage limiting: keep a Newton step on an exponential within where the linearisation
+ * is trustworthy. Returns the limited voltage (or vnew itself).
+ */
+export function pnjlim(vnew: number, vold: number, nvt: number, vcrit: number): number {
+  if (vnew > vcrit && Math.abs(vnew - vold) > 2 * nvt) {
+    if (vold > 0) {
+      const arg = 1 + (vnew - vold) / nvt;
+      return arg > 0 ? vold + nvt * Math.log(arg) : vcrit;
+    }
+    return nvt * Math.log(vnew / nvt);
+  }
+  if (vnew < 0) {
+    // limit large negative steps too (as ngspice does)
+    const arg = vold > 0 ? -1 - vold : 2 * vold - 1;
+    if (vnew < arg) return arg;
+  }
+  return vnew;
+}
+
+/**
+ * Saturation current at temperature T (K), given its value at 25 °C:
+ * I_S(T) = I_S·(T/T₀)^(XTI/n)·exp((T/T₀ − 1)·E_g/(n·V_T(T))). Exactly I_S at T₀ = 298.15 K.
+ */
+export function scaleSaturationCurrent(is25: number, temperatureK: number, n: number, eg: number, xti: number): number {
+  if (temperatureK === NOMINAL_TEMPERATURE_K) return is25;
+  const ratio = temperatureK / NOMINAL_TEMPERATURE_K;
+  const vt = thermalVoltage(temperatureK);
+  return is25 * Math.pow(ratio, xti / n) * Math.exp(((ratio - 1) * eg) / (n * vt));
+}
+
+/**
+ * A junction with optional reverse breakdown, as used by the diode, the Zener and the LED:
+ *   i(v) = I_S·(e^{v/(n·V_T)} − 1) − I_B·(e^{−(v+B)/a} − e^{−B/a}) + gmin·v
+ * where the breakdown term (absent when B is undefined) passes I_B at v = −B with slope I_B/a.
+ */
+export interface JunctionParams {
+  is: number;
+  nvt: number;
+  breakdown?: { voltage: number; current: number; slope: number };
+}
+
+export interface JunctionEval {
+  i: number;
+  g: number;
+}
+
+export function junctionCurrent(p: JunctionParams, v: number, gmin: number): JunctionEval {
+  const u = v / p.nvt;
+  let i = p.is * (limexp(u) - 1);
+  let g = (p.is / p.nvt) * dlimexp(u);
+  if (p.breakdown) {
+    const { voltage: bv, current: ib, slope: a } = p.breakdown;
+    const w = -(v + bv) / a;
+    i -= ib * (limexp(w) - Math.exp(-bv / a));
+    g += (ib / a) * dlimexp(w);
+  }
+  return { i: i + gmin * v, g: g + gmin };
+}
+
+/** Limiting for a junction with optional breakdown (forward via pnjlim; breakdown mirrored). */
+export function limitJunction(p: JunctionParams, vnew: number, vold: number): number {
+  if (p.breakdown) {
+    const { voltage: bv, current: ib, slope: a } = p.breakdown;
+    if (vnew < Math.min(0, -bv + 10 * a)) {
+      const vcritB = criticalVoltage(a, ib);
+      const t = pnjlim(-(vnew + bv), -(vold + bv), a, vcritB);
+      return -(t + bv);
+    }
+  }
+  return pnjlim(vnew, vold, p.nvt, criticalVoltage(p.nvt, p.is));
+}

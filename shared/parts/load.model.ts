@@ -1,0 +1,67 @@
+import { GROUND, nodeV, type Device, type DeviceModel } from '../engine/device';
+import type { ParamsOf } from '../sheet/schema';
+import { fmt, resistiveDevice } from './model-helpers';
+
+/** Constant-power current: P/v above minVoltage, the resistance minVoltage²/P below it. */
+export function powerLoadCurrent(P: number, vmin: number, v: number): { i: number; g: number } {
+  if (Math.abs(v) >= vmin) return { i: P / v, g: -P / (v * v) };
+  return { i: (P * v) / (vmin * vmin), g: P / (vmin * vmin) };
+}
+
+export const loadModel: DeviceModel<ParamsOf<'load'>> = {
+  topology: (p) => (p.mode === 'current' ? [{ kind: 'current', a: 0, b: 1, value: -p.value }] : [{ kind: 'resistive', a: 0, b: 1 }]),
+  create({ partId, params, pins, alloc }): Device {
+    const [pos, neg] = pins;
+    const nodes = pins.filter((n) => n !== GROUND);
+    if (params.mode === 'resistance') return resistiveDevice(partId, pins, params.value, alloc);
+    if (params.mode === 'current') {
+      const I = params.value;
+      return {
+        partId,
+        nonlinear: false,
+        nodes,
+        load: (s) => s.current(pos, neg, I * s.sourceScale),
+        residual(_x, sink, _g, scale) {
+          sink.add(pos, I * scale);
+          sink.add(neg, -I * scale);
+        },
+        pinCurrents: () => [I, -I],
+      };
+    }
+    const P = params.value;
+    const vmin = params.minVoltage;
+    return {
+      partId,
+      nonlinear: true,
+      nodes,
+      load(s, x) {
+        const v = nodeV(x, pos) - nodeV(x, neg);
+        const { i, g } = powerLoadCurrent(P * s.sourceScale, vmin, v);
+        s.nonlinear([pos, neg], [i, -i], [[pos, neg, v]], [[g], [-g]]);
+      },
+      residual(x, sink, _g, scale) {
+        const { i } = powerLoadCurrent(P * scale, vmin, nodeV(x, pos) - nodeV(x, neg));
+        sink.add(pos, i);
+        sink.add(neg, -i);
+      },
+      pinCurrents(x) {
+        const { i } = powerLoadCurrent(P, vmin, nodeV(x, pos) - nodeV(x, neg));
+        return [i, -i];
+      },
+      report(_x, pv) {
+        const v = pv[0] - pv[1];
+        if (Math.abs(v) < vmin && P > 0)
+          return {
+            warnings: [
+              {
+                code: 'load_undervoltage',
+                severity: 'warning',
+                message: `${partId} (a ${fmt(P, 'W')} constant-power load) sees only ${fmt(v, 'V')}, below its ${fmt(vmin, 'V')} minimum: the supply cannot deliver the power. Lower the series resistance or the load power.`,
+              },
+            ],
+          };
+        return {};
+      },
+    };
+  },
+};

@@ -1,0 +1,169 @@
+// Building blocks shared by the device models.
+import { GROUND, nodeV, type Allocator, type Device, type DeviceWarning, type ResidualSink, type Stamper } from '../engine/device';
+import { junctionCurrent, limitJunction, type JunctionParams } from '../engine/junction';
+
+/** A linear two-terminal resistance between nodes a and b; 0 Ω becomes a branch-current link. */
+export interface Element {
+  load(s: Stamper, x: Float64Array): void;
+  residual(x: Float64Array, sink: ResidualSink): void;
+  /** current from a to b through the element */
+  current(x: Float64Array): number;
+}
+
+export function resistanceElement(a: number, b: number, r: number, alloc: Allocator, name: string): Element {
+  if (r === 0) {
+    const k = alloc.branch(name);
+    return {
+      load(s) {
+        s.add(a, k, 1);
+        s.add(b, k, -1);
+        s.add(k, a, 1);
+        s.add(k, b, -1);
+      },
+      residual(x, sink) {
+        sink.add(a, x[k]);
+        sink.add(b, -x[k]);
+      },
+      current: (x) => x[k],
+    };
+  }
+  const g = 1 / r;
+  return {
+    load(s) {
+      s.conductance(a, b, g);
+    },
+    residual(x, sink) {
+      const i = g * (nodeV(x, a) - nodeV(x, b));
+      sink.add(a, i);
+      sink.add(b, -i);
+    },
+    current: (x) => g * (nodeV(x, a) - nodeV(x, b)),
+  };
+}
+
+/** A linear two-pin part made of one resistance (resistor, NTC, LDR, switch, resistive load). */
+export function resistiveDevice(
+  partId: string,
+  pins: readonly number[],
+  r: number,
+  alloc: Allocator,
+  report?: Device['report'],
+): Device {
+  const el = resistanceElement(pins[0], pins[1], r, alloc, `${partId}:R`);
+  return {
+    partId,
+    nonlinear: false,
+    nodes: pins.filter((p) => p !== GROUND),
+    load: (s, x) => el.load(s, x),
+    residual: (x, sink) => el.residual(x, sink),
+    pinCurrents: (x) => {
+      const i = el.current(x);
+      return [i, -i];
+    },
+    ...(report ? { report } : {}),
+  };
+}
+
+/**
+ * A two-terminal junction (anode, cathode) with optional series resistance, Newton-linearised with
+ * junction-voltage limiting. Used by the diode, Zener and LED models.
+ */
+export function junctionDevice(
+  partId: string,
+  pins: readonly number[],
+  jp: JunctionParams,
+  seriesResistance: number,
+  alloc: Allocator,
+  initialVoltage: number,
+  report?: Device['report'],
+): Device {
+  const [an, ca] = pins;
+  const j = seriesResistance > 0 ? alloc.internalNode(`${partId}:junction`) : an;
+  const rs = seriesResistance > 0 ? resistanceElement(an, j, seriesResistance, alloc, `${partId}:Rs`) : null;
+  let vold = 0;
+  let cold = true;
+  const nodes = [an, ca, ...(j !== an ? [j] : [])].filter((n) => n !== GROUND);
+  return {
+    partId,
+    nonlinear: true,
+    nodes,
+    begin(x) {
+      if (x.length === 0 || x.every((v) => v === 0)) {
+        cold = true;
+      } else {
+        cold = false;
+        vold = nodeV(x, j) - nodeV(x, ca);
+      }
+    },
+    load(s, x) {
+      rs?.load(s, x);
+      const vnew = nodeV(x, j) - nodeV(x, ca);
+      let v: number;
+      if (cold) {
+        v = initialVoltage;
+        cold = false;
+        s.markLimited();
+      } else {
+        v = limitJunction(jp, vnew, vold);
+        if (v !== vnew) s.markLimited();
+      }
+      vold = v;
+      const { i, g } = junctionCurrent(jp, v, s.gmin);
+      s.nonlinear([j, ca], [i, -i], [[j, ca, v]], [[g], [-g]]);
+    },
+    residual(x, sink, gmin) {
+      rs?.residual(x, sink);
+      const { i } = junctionCurrent(jp, nodeV(x, j) - nodeV(x, ca), gmin);
+      sink.add(j, i);
+      sink.add(ca, -i);
+    },
+    pinCurrents(x, gmin) {
+      const i = rs ? rs.current(x) : junctionCurrent(jp, nodeV(x, an) - nodeV(x, ca), gmin).i;
+      return [i, -i];
+    },
+    ...(report ? { report } : {}),
+  };
+}
+
+/** Power-rating warnings: danger above the rating, caution above 50 % of it. */
+export function powerRatingWarnings(partLabel: string, power: number, rating: number, what = 'dissipates'): DeviceWarning[] {
+  if (power > rating)
+    return [
+      {
+        code: 'power_over_rating',
+        severity: 'danger',
+        message: `${partLabel} ${what} ${fmt(power, 'W')}, above its ${fmt(rating, 'W')} rating. Use a part with a higher power rating, or reduce the voltage across it.`,
+      },
+    ];
+  if (power > 0.5 * rating)
+    return [
+      {
+        code: 'power_above_derating',
+        severity: 'caution',
+        message: `${partLabel} ${what} ${fmt(power, 'W')}, more than 50 % of its ${fmt(rating, 'W')} rating. Common practice derates to 50 %: consider a part rated ${fmt(2 * power, 'W')} or more.`,
+      },
+    ];
+  return [];
+}
+
+const PREFIXES: Array<[number, string]> = [
+  [1e9, 'G'],
+  [1e6, 'M'],
+  [1e3, 'k'],
+  [1, ''],
+  [1e-3, 'm'],
+  [1e-6, 'µ'],
+  [1e-9, 'n'],
+  [1e-12, 'p'],
+];
+
+/** Compact engineering formatting for messages (the editor has its own formatter in shared/units). */
+export function fmt(v: number, unit: string): string {
+  if (!Number.isFinite(v)) return `${v} ${unit}`;
+  if (v === 0) return `0 ${unit}`;
+  const a = Math.abs(v);
+  for (const [f, p] of PREFIXES) {
+    if (a >= f * 0.9995) return `${Number((v / f).toPrecision(3))} ${p}${unit}`;
+  }
+  return `${v.toExponential(2)} ${unit}`;
+}
