@@ -11,13 +11,24 @@ import { authRouter, meRouter } from './auth/routes';
 import { fakeProviderRouter } from './auth/fake-provider/routes';
 import { createCsrf } from './security/csrf';
 import { securityHeaders } from './security/headers';
-import { signInLimiter } from './security/rate-limits';
+import { invitationLimiter, signInLimiter } from './security/rate-limits';
+import { projectAccessGuard } from './authz/project-access';
+import { projectsRouter } from './projects/routes';
+import { importExportRouter } from './projects/import-export';
+import { shareRouter } from './projects/share';
+import { membersRouter } from './members/routes';
+import { invitationsRouter } from './invitations/routes';
+import { revisionsRouter } from './revisions/routes';
+import { mailboxRouter } from './mail/mailbox';
+import type { Mail } from './mail/mailer';
 
 export interface AppDeps {
   config: Config;
   database: Database;
   /** Folder of the built client; omitted in API-only tests. */
   staticDir?: string;
+  /** Outgoing mail (see `startMail`); without it invitations answer 503. */
+  mail?: Mail | null;
 }
 
 /** Largest JSON body the API reads; a sheet of a few hundred parts is well under 100 kB. */
@@ -26,6 +37,8 @@ export const JSON_LIMIT = '1mb';
 /** Builds the Express app without listening, so tests can drive it with supertest. */
 export function createApp(deps: AppDeps): Express {
   const { config, database } = deps;
+  const db = database.db;
+  const mail = deps.mail ?? null;
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -33,9 +46,10 @@ export function createApp(deps: AppDeps): Express {
 
   app.use('/api', healthRouter(database));
   if (!usesRealOAuth(config)) app.use('/fake-oauth', fakeProviderRouter());
+  if (mail?.toSink) app.use('/dev', mailboxRouter(db));
 
   const sessions = createSessions(config, database);
-  const passport = createPassport(database.db);
+  const passport = createPassport(db);
   const csrf = createCsrf();
   app.use(sessions.middleware);
   app.use(passport.initialize());
@@ -43,10 +57,18 @@ export function createApp(deps: AppDeps): Express {
   app.use(express.json({ limit: JSON_LIMIT }));
 
   app.use('/auth/logout', csrf.protect);
-  app.use('/auth', authRouter({ config, passport, strategyFor: createStrategyFactory(config, database.db), signInLimiter: signInLimiter(config) }));
+  app.use('/auth', authRouter({ config, passport, strategyFor: createStrategyFactory(config, db), signInLimiter: signInLimiter(config) }));
+
+  const requireProjectRole = projectAccessGuard(db);
   app.use('/api', csrf.tokenRouter);
   app.use('/api', csrf.protect);
   app.use('/api', meRouter(config));
+  app.use('/api', importExportRouter(db, requireProjectRole));
+  app.use('/api', projectsRouter(db, requireProjectRole));
+  app.use('/api', membersRouter(db, requireProjectRole));
+  app.use('/api', invitationsRouter({ config, db, mail, requireProjectRole, limiter: invitationLimiter(config) }));
+  app.use('/api', revisionsRouter(db, requireProjectRole));
+  app.use('/api', shareRouter(db, requireProjectRole));
   app.use('/api', notFoundApi);
 
   if (deps.staticDir) mountClient(app, deps.staticDir);

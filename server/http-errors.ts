@@ -7,6 +7,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly field?: string,
+    /** Extra members of the error object, e.g. `issues` of a bad sheet or `currentVersion` of a conflict. */
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
   }
@@ -19,7 +21,7 @@ export const notFoundApi: RequestHandler = (req, _res, next) => {
 // The one place errors become responses: never a stack trace to the client.
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof HttpError) {
-    res.status(err.status).json({ error: { code: err.code, message: err.message, ...(err.field ? { field: err.field } : {}) } });
+    res.status(err.status).json({ error: { ...err.details, code: err.code, message: err.message, ...(err.field ? { field: err.field } : {}) } });
     return;
   }
   const status = typeof err?.status === 'number' && err.status >= 400 && err.status < 500 ? err.status : 500;

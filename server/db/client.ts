@@ -3,6 +3,9 @@ import { drizzle, type NodePgDatabase } from 'drizzle-orm/node-postgres';
 import * as schema from './schema';
 
 export type Db = NodePgDatabase<typeof schema>;
+/** A transaction handle; queries that run inside or outside one take `DbOrTx`. */
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+export type DbOrTx = Db | Tx;
 
 export interface Database {
   pool: pg.Pool;
