@@ -136,6 +136,35 @@ class BestOf {
   }
 }
 
+/**
+ * The `perTopology` best distinct matches for `target` (Ω) of each topology, drawn from
+ * `values` (ascending, ohms), best first within each list. The building block of findValue for
+ * callers that already hold a part list (the divider designer).
+ */
+export function searchMatches(
+  values: readonly number[],
+  target: number,
+  topologies: readonly Topology[],
+  perTopology: number,
+): ValueMatch[][] {
+  if (values.length === 0) return topologies.map(() => []);
+  return topologies.map((topology) => {
+    const keep = new BestOf(topology, target, perTopology);
+    const two = (a: number, b: number) => keep.offer([a, b]);
+    const three = (a: number, b: number, c: number) => keep.offer([a, b, c]);
+    if (topology === 'single') {
+      const i = lowerBound(values, target);
+      for (let k = Math.max(0, i - perTopology); k < Math.min(values.length, i + perTopology); k++) keep.offer([values[k]]);
+    } else if (topology === 'series') searchSeriesPairs(values, target, two);
+    else if (topology === 'parallel') searchParallelPairs(values, target, two);
+    else if (topology === 'series3') searchSeriesTriples(values, target, three);
+    else if (topology === 'parallel3') searchParallelTriples(values, target, three);
+    else if (topology === 'series-parallel') searchSeriesOfParallel(values, target, three);
+    else searchParallelOfSeries(values, target, three);
+    return keep.kept.map((m) => ({ ...m, expression: describeCombination(m.topology, m.parts) }));
+  });
+}
+
 export interface ValueFinderOptions {
   /** Series to draw parts from (default E24). */
   series?: ESeriesName;
@@ -177,21 +206,8 @@ export function findValue(targetOhms: number, options: ValueFinderOptions = {}):
   const all: ValueMatch[] = [];
   if (values.length === 0) return { target: targetOhms, series, best, ranked: [] };
 
-  for (const topology of topologies) {
-    const keep = new BestOf(topology, targetOhms, perTopology);
-    const two = (a: number, b: number) => keep.offer([a, b]);
-    const three = (a: number, b: number, c: number) => keep.offer([a, b, c]);
-    if (topology === 'single') {
-      const i = lowerBound(values, targetOhms);
-      for (let k = Math.max(0, i - perTopology); k < Math.min(values.length, i + perTopology); k++) keep.offer([values[k]]);
-    } else if (topology === 'series') searchSeriesPairs(values, targetOhms, two);
-    else if (topology === 'parallel') searchParallelPairs(values, targetOhms, two);
-    else if (topology === 'series3') searchSeriesTriples(values, targetOhms, three);
-    else if (topology === 'parallel3') searchParallelTriples(values, targetOhms, three);
-    else if (topology === 'series-parallel') searchSeriesOfParallel(values, targetOhms, three);
-    else searchParallelOfSeries(values, targetOhms, three);
-    const kept = keep.kept.map((m) => ({ ...m, expression: describeCombination(m.topology, m.parts) }));
-    if (kept.length > 0) best[topology] = kept[0];
+  for (const kept of searchMatches(values, targetOhms, topologies, perTopology)) {
+    if (kept.length > 0) best[kept[0].topology] = kept[0];
     all.push(...kept);
   }
   all.sort(compareMatches);
