@@ -7,3 +7,4 @@ export * from './lu-refactor';
 export * from './lu-symbolic';
 export * from './sparse-pattern';
 export * from './sparse-solver';
+export * from './mna-system';

@@ -49,6 +49,12 @@ function grow<T extends Int32Array | Float64Array>(a: T, need: number): T {
  * @param pivotTolerance 0 < tol ≤ 1: accept the diagonal when |a_kk| ≥ tol·max|candidate| (1 = plain partial pivoting)
  * @throws SingularMatrixError when a column has no non-zero pivot candidate
  */
+/**
+ * A pivot at or below this fraction of the largest entry of its column of A counts as zero (as in
+ * the engine's dense solver): what is left of the column after elimination is rounding noise.
+ */
+export const SINGULAR_PIVOT_RELATIVE = 1e-15;
+
 export function luFactor(a: CscMatrix, colPerm: Int32Array, pivotTolerance = 0.1): LuFactors {
   const n = a.cols;
   const { colPtr: Ap, rowIdx: Ai, values: Ax } = a;
@@ -118,7 +124,12 @@ export function luFactor(a: CscMatrix, colPerm: Int32Array, pivotTolerance = 0.1
     }
 
     // numeric: x = L \ A(:,col)
-    for (let p = Ap[col]; p < Ap[col + 1]; p++) x[Ai[p]] = Ax[p];
+    let colMax = 0;
+    for (let p = Ap[col]; p < Ap[col + 1]; p++) {
+      x[Ai[p]] = Ax[p];
+      const t = Math.abs(Ax[p]);
+      if (t > colMax) colMax = t;
+    }
     for (let px = top; px < n; px++) {
       const j = xi[px];
       const J = pinv[j];
@@ -143,7 +154,10 @@ export function luFactor(a: CscMatrix, colPerm: Int32Array, pivotTolerance = 0.1
         Ux[unz++] = x[i];
       }
     }
-    if (ipiv === -1 || !(big > 0)) throw new SingularMatrixError(col);
+    if (ipiv === -1 || !(big > SINGULAR_PIVOT_RELATIVE * colMax) || !(big > 0)) {
+      for (let px = top; px < n; px++) x[xi[px]] = 0;
+      throw new SingularMatrixError(col);
+    }
     if (pinv[col] < 0 && marked[col] === stamp && Math.abs(x[col]) >= big * pivotTolerance) ipiv = col;
     const pivot = x[ipiv];
     worstRatio = Math.min(worstRatio, Math.abs(pivot) / big);

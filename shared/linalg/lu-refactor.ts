@@ -5,7 +5,7 @@
 // only while they stay large enough, so every pivot is checked against its column and the caller
 // falls back to a full factorisation (with pivot search) when one has become too small.
 import type { CscMatrix } from './csc';
-import type { LuFactors } from './lu-factor';
+import { SINGULAR_PIVOT_RELATIVE, type LuFactors } from './lu-factor';
 
 /**
  * Overwrite the values of `f` with the factors of `a`, which must have the pattern `f` was built
@@ -20,7 +20,13 @@ export function luRefactor(f: LuFactors, a: CscMatrix, pivotTolerance = 1e-3, wo
   let worstRatio = 1;
   for (let k = 0; k < n; k++) {
     const col = colPerm[k];
-    for (let p = Ap[col]; p < Ap[col + 1]; p++) x[pinv[Ai[p]]] = Ax[p];
+    let colMax = 0;
+    for (let p = Ap[col]; p < Ap[col + 1]; p++) {
+      const v = Ax[p];
+      x[pinv[Ai[p]]] = v;
+      if (v > colMax) colMax = v;
+      else if (-v > colMax) colMax = -v;
+    }
     const uEnd = Up[k + 1] - 1; // the diagonal is stored last
     for (let p = Up[k]; p < uEnd; p++) {
       const j = Ui[p];
@@ -39,7 +45,7 @@ export function luRefactor(f: LuFactors, a: CscMatrix, pivotTolerance = 1e-3, wo
       if (t > big) big = t;
     }
     const ratio = big > 0 ? Math.abs(pivot) / big : 0;
-    if (!(ratio >= pivotTolerance) || pivot === 0) {
+    if (!(ratio >= pivotTolerance) || !(Math.abs(pivot) > SINGULAR_PIVOT_RELATIVE * colMax)) {
       x.fill(0);
       return false;
     }
