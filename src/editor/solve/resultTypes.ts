@@ -1,5 +1,6 @@
 // The operating-point result as the sheet-format contract fixes it (shared/contracts/sheet-format.md,
-// "Results"). Kept here as the editor's view of it, so the canvas does not depend on engine internals.
+// "Results"): the editor's view of it. shared/engine's SolveResult is assignable to this type; the
+// editor adds its own failure (a crashed worker) and its own safety checks (safetyChecks.ts).
 
 export type WarningSeverity = 'info' | 'caution' | 'warning' | 'danger' | 'error';
 
@@ -18,6 +19,8 @@ export interface PartResult {
   /** power absorbed, W (negative when the part delivers power) */
   power: number;
   warnings: SolveWarning[];
+  /** operating quantities the engine reports (resistance at temperature, transistor region, …) */
+  derived?: Record<string, number | string>;
 }
 
 export interface SolveSuccess {
@@ -35,6 +38,8 @@ export interface SolveSuccess {
 export interface SolveFailure {
   ok: false;
   error: { code: string; message: string; parts?: string[]; nets?: string[] };
+  /** findings made before the failure (e.g. unconnected pins) that help explain it */
+  warnings?: SolveWarning[];
 }
 
 export type SolveResult = SolveSuccess | SolveFailure;
