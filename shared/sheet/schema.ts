@@ -46,7 +46,7 @@ function partSchemaFor<T extends PartType>(type: T) {
   return z.looseObject({
     id: PartIdSchema,
     type: z.literal(type),
-    params: (spec.paramsSchema as z.ZodObject).prefault({}) as unknown as (typeof partSpecs)[T]['paramsSchema'],
+    params: (spec.paramsSchema as z.ZodObject).prefault({}) as unknown as z.ZodPrefault<(typeof partSpecs)[T]['paramsSchema']>,
     position: PositionSchema.optional(),
     rotation: RotationSchema.optional(),
     /** optional display label; layout only */
