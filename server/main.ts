@@ -1,9 +1,10 @@
 import http from 'node:http';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { ConfigError, loadConfig } from './config';
+import { ConfigError, loadConfig, usesRealOAuth } from './config';
 import { openDatabase } from './db/client';
 import { createApp } from './app';
+import { startMail } from './mail/mailer';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -27,19 +28,27 @@ async function main(): Promise<void> {
     exitWith(`Cannot reach the database at ${redact(config.DATABASE_URL)}: ${(err as Error).message}`,
       'Check that PostgreSQL runs and DATABASE_URL is right, or unset DATABASE_URL to let `npm start` run a local one.');
   }
-  const app = createApp({ config, database, staticDir: config.TAPLINE_STATIC_DIR ?? path.join(root, 'dist') });
+  const mail = await startMail(config, database);
+  const app = createApp({ config, database, mail, staticDir: config.TAPLINE_STATIC_DIR ?? path.join(root, 'dist') });
   const server = http.createServer(app);
   server.on('error', (err: NodeJS.ErrnoException) => {
     if (err.code === 'EADDRINUSE') exitWith(`Port ${config.PORT} is already in use.`, 'Stop the program using it, or start with another port: PORT=5180 npm start');
     exitWith(`The server could not listen: ${err.message}`, 'Check HOST and PORT.');
   });
   server.listen(config.PORT, config.HOST, () => {
-    console.log(`tapline: serving on http://${config.HOST === '0.0.0.0' ? 'localhost' : config.HOST}:${config.PORT}`);
+    const origin = `http://${config.HOST === '0.0.0.0' ? 'localhost' : config.HOST}:${config.PORT}`;
+    console.log(`tapline: serving on ${origin}`);
+    if (!usesRealOAuth(config)) console.log(`tapline: sign-in uses the local fake provider (${origin}/fake-oauth/); set GITHUB_CLIENT_ID/SECRET for GitHub.`);
+    if (mail?.toSink) console.log(`tapline: e-mail goes to a local sink; read it at ${origin}/dev/mailbox`);
+    if (!mail) console.log('tapline: no SMTP_HOST set, so invitations cannot be sent.');
   });
   const stop = () => {
     server.close();
     server.closeAllConnections();
-    void database.close().finally(() => process.exit(0));
+    void Promise.resolve(mail?.close())
+      .catch(() => undefined)
+      .then(() => database.close())
+      .finally(() => process.exit(0));
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);
