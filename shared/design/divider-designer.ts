@@ -88,21 +88,24 @@ export function designDivider(spec: DividerSpec): DividerDesign {
     if (above < values.length && values[above] <= hi * (1 + 1e-12)) out.push(values[above]);
     return out;
   };
-  // Pair realisations lie within a series step or so of the ideal value.
-  const pairs = (ideal: number): DividerLeg[] =>
-    pairTopologies.length === 0 ? [] : searchMatches(values, ideal, pairTopologies, 2).flat();
+  // Pair realisations land within a series step of the ideal value (E6's widest step is ×1.5),
+  // so skip the search when the ideal leg puts the total far outside the window.
+  const pairs = (ideal: number, other: number): DividerLeg[] =>
+    pairTopologies.length === 0 || ideal + other < c.totalMin / 2 || ideal + other > c.totalMax * 2
+      ? []
+      : searchMatches(values, ideal, pairTopologies, 2).flat();
 
   for (const walked of values) {
     if (walked >= c.totalMax) break;
     const idealTop = topForOutput(c.supply.nominal, c.target, walked, c.load);
     if (idealTop !== null && idealTop > 0) {
       for (const r of bracket(idealTop, walked)) consider(single(r), single(walked));
-      for (const leg of pairs(idealTop)) consider(leg, single(walked));
+      for (const leg of pairs(idealTop, walked)) consider(leg, single(walked));
     }
     const idealBottom = bottomForOutput(c.supply.nominal, c.target, walked, c.load);
     if (idealBottom !== null && idealBottom > 0) {
       for (const r of bracket(idealBottom, walked)) consider(single(walked), single(r));
-      for (const leg of pairs(idealBottom)) consider(single(walked), leg);
+      for (const leg of pairs(idealBottom, walked)) consider(single(walked), leg);
     }
   }
 

@@ -3,7 +3,6 @@
  * target resistance, ranked by relative error.
  */
 import { PREFERRED_RANGE, preferredValuesBetween, type ESeriesName } from '../units/eseries';
-import { formatRkm } from '../units/rkm';
 import { lowerBound } from '../units/sorted-search';
 import {
   searchParallelOfSeries,
@@ -13,128 +12,11 @@ import {
   searchSeriesPairs,
   searchSeriesTriples,
 } from './combination-search';
+import { BestOf, compareMatches, describeCombination } from './match-ranking';
+import { TOPOLOGIES_BY_PARTS, type Topology, type ValueMatch } from './combination';
 
-/**
- * How the parts are joined. For three parts: `series3` a + b + c, `parallel3` a ∥ b ∥ c,
- * `series-parallel` a + (b ∥ c), `parallel-series` a ∥ (b + c).
- */
-export type Topology = 'single' | 'series' | 'parallel' | 'series3' | 'parallel3' | 'series-parallel' | 'parallel-series';
-
-export const TOPOLOGIES_BY_PARTS: Readonly<Record<1 | 2 | 3, readonly Topology[]>> = {
-  1: ['single'],
-  2: ['single', 'series', 'parallel'],
-  3: ['single', 'series', 'parallel', 'series3', 'parallel3', 'series-parallel', 'parallel-series'],
-};
-
-export interface ValueMatch {
-  readonly topology: Topology;
-  /** Part values in ohms, in the order the topology's formula names them. */
-  readonly parts: readonly number[];
-  /** The combined resistance, ohms. */
-  readonly value: number;
-  /** Signed relative error (value − target) / target: 0.01 means 1 % high. */
-  readonly error: number;
-  /** How to build it, in RKM: "4K7 + 1K0", "10K ∥ 22K", "1K0 + (10K ∥ 22K)". */
-  readonly expression: string;
-}
-
-const par = (a: number, b: number) => (a * b) / (a + b);
-
-/** The resistance (ohms) of `parts` (ohms) joined as `topology`. */
-export function combinedResistance(topology: Topology, parts: readonly number[]): number {
-  const [a, b, c] = parts;
-  switch (topology) {
-    case 'single':
-      return a;
-    case 'series':
-      return a + b;
-    case 'parallel':
-      return par(a, b);
-    case 'series3':
-      return a + b + c;
-    case 'parallel3':
-      return 1 / (1 / a + 1 / b + 1 / c);
-    case 'series-parallel':
-      return a + par(b, c);
-    case 'parallel-series':
-      return par(a, b + c);
-  }
-}
-
-// Orders parts so equal combinations compare equal: the largest first in a sum, the smallest
-// first in a parallel group, the lone part first in the mixed forms.
-function canonical(topology: Topology, parts: number[]): number[] {
-  const down = (x: number[]) => [...x].sort((p, q) => q - p);
-  const up = (x: number[]) => [...x].sort((p, q) => p - q);
-  switch (topology) {
-    case 'series':
-    case 'series3':
-      return down(parts);
-    case 'parallel':
-    case 'parallel3':
-      return up(parts);
-    case 'series-parallel':
-      return [parts[0], ...up(parts.slice(1))];
-    case 'parallel-series':
-      return [parts[0], ...down(parts.slice(1))];
-    default:
-      return parts;
-  }
-}
-
-/** A human-readable build recipe in RKM notation. */
-export function describeCombination(topology: Topology, parts: readonly number[]): string {
-  const t = parts.map((p) => formatRkm(p));
-  switch (topology) {
-    case 'single':
-      return t[0];
-    case 'series':
-    case 'series3':
-      return t.join(' + ');
-    case 'parallel':
-    case 'parallel3':
-      return t.join(' ∥ ');
-    case 'series-parallel':
-      return `${t[0]} + (${t[1]} ∥ ${t[2]})`;
-    case 'parallel-series':
-      return `${t[0]} ∥ (${t[1]} + ${t[2]})`;
-  }
-}
-
-/** Best-first order: smaller |error|, then fewer parts, then the smaller largest part (cheaper, lower-noise ranges). */
-export function compareMatches(x: ValueMatch, y: ValueMatch): number {
-  const dx = Math.abs(x.error);
-  const dy = Math.abs(y.error);
-  if (Math.abs(dx - dy) > 1e-12 * Math.max(dx, dy, 1e-300)) return dx - dy;
-  if (x.parts.length !== y.parts.length) return x.parts.length - y.parts.length;
-  return Math.max(...x.parts) - Math.max(...y.parts);
-}
-
-/** Keeps the `size` best distinct matches offered for one topology. */
-class BestOf {
-  readonly kept: ValueMatch[] = [];
-  private readonly keys = new Set<string>();
-  constructor(
-    private readonly topology: Topology,
-    private readonly target: number,
-    private readonly size: number,
-  ) {}
-
-  offer(raw: number[]): void {
-    const value = combinedResistance(this.topology, raw);
-    const error = (value - this.target) / this.target;
-    const worst = this.kept[this.kept.length - 1];
-    if (this.kept.length >= this.size && Math.abs(error) > Math.abs(worst.error)) return;
-    const parts = canonical(this.topology, raw);
-    const key = parts.join(',');
-    if (this.keys.has(key)) return;
-    const match: ValueMatch = { topology: this.topology, parts, value, error, expression: '' };
-    const at = this.kept.findIndex((m) => compareMatches(match, m) < 0);
-    this.kept.splice(at < 0 ? this.kept.length : at, 0, match);
-    this.keys.add(key);
-    if (this.kept.length > this.size) this.keys.delete(this.kept.pop()!.parts.join(','));
-  }
-}
+export { combinedResistance, TOPOLOGIES_BY_PARTS, type Topology, type ValueMatch } from './combination';
+export { compareMatches, describeCombination } from './match-ranking';
 
 /**
  * The `perTopology` best distinct matches for `target` (Ω) of each topology, drawn from

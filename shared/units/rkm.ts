@@ -60,7 +60,7 @@ export type RkmParse =
  * digits then a letter then a tolerance letter (10KJ), or digits then L, a letter only RKM uses (10L).
  */
 export function looksLikeRkm(body: string): boolean {
-  return /^\d*[^\d\s.,eE+\-]\d/.test(body) || /^\d+[LRrKkMGTmµunpVAW][BCDFGJKM]/.test(body) || /^\d+L/.test(body);
+  return /^\d*[^\d\s.,eE+-]\d/.test(body) || /^\d+[LRrKkMGTmµunpVAW][BCDFGJKM]/.test(body) || /^\d+L/.test(body);
 }
 
 /**
