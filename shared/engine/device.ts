@@ -3,6 +3,17 @@
 // (Ho, Ruehli & Brennan, "The modified nodal approach to network analysis", IEEE Trans. Circuits
 // and Systems 22(6), 1975) and reports its pin currents.
 
+/**
+ * Resistances below this (Ω) are ideal 0 Ω links, solved by a branch current: a conductance of
+ * 1e6 S or more would swamp the rest of the matrix and lose the current in rounding.
+ */
+export const LINK_RESISTANCE = 1e-6;
+
+/** true when a resistance is to be treated as an ideal link */
+export function isLink(r: number): boolean {
+  return r < LINK_RESISTANCE;
+}
+
 /** Unknown index of the reference (ground) node: never stamped. */
 export const GROUND = -1;
 

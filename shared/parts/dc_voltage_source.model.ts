@@ -1,15 +1,15 @@
-import { GROUND, nodeV, type DeviceModel } from '../engine/device';
+import { GROUND, isLink, nodeV, type DeviceModel } from '../engine/device';
 import type { ParamsOf } from '../sheet/schema';
 
 export const dcVoltageSourceModel: DeviceModel<ParamsOf<'dc_voltage_source'>> = {
   topology: (p) =>
-    p.internalResistance === 0
+    isLink(p.internalResistance)
       ? [{ kind: 'voltage', a: 0, b: 1, value: p.voltage, source: true }]
       : [{ kind: 'resistive', a: 0, b: 1 }],
   create({ partId, params, pins, alloc }) {
     const [pos, neg] = pins;
     const k = alloc.branch(`${partId}:I`);
-    const rint = params.internalResistance;
+    const rint = isLink(params.internalResistance) ? 0 : params.internalResistance;
     return {
       partId,
       nonlinear: false,

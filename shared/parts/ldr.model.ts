@@ -1,6 +1,6 @@
 import type { DeviceModel } from '../engine/device';
 import type { ParamsOf } from '../sheet/schema';
-import { resistiveDevice } from './model-helpers';
+import { resistanceEdge, resistiveDevice } from './model-helpers';
 
 /** R = R₁₀·(E/10 lx)^(−γ), capped at the dark resistance (and equal to it at 0 lx). */
 export function ldrResistance(p: ParamsOf<'ldr'>, illuminanceLux: number): number {
@@ -9,7 +9,7 @@ export function ldrResistance(p: ParamsOf<'ldr'>, illuminanceLux: number): numbe
 }
 
 export const ldrModel: DeviceModel<ParamsOf<'ldr'>> = {
-  topology: () => [{ kind: 'resistive', a: 0, b: 1 }],
+  topology: (p, env) => [resistanceEdge(ldrResistance(p, env.illuminanceLux))],
   create({ partId, params, env, pins, alloc }) {
     const r = ldrResistance(params, env.illuminanceLux);
     return resistiveDevice(partId, pins, r, alloc, (_x, pv, pi) => ({

@@ -1,5 +1,5 @@
 // Building blocks shared by the device models.
-import { GROUND, nodeV, type Allocator, type Device, type DeviceWarning, type ResidualSink, type Stamper } from '../engine/device';
+import { GROUND, isLink, nodeV, type Allocator, type Device, type DeviceWarning, type ResidualSink, type Stamper, type TopologyEdge } from '../engine/device';
 import { junctionCurrent, limitJunction, type JunctionParams } from '../engine/junction';
 
 /** A linear two-terminal resistance between nodes a and b; 0 Ω becomes a branch-current link. */
@@ -11,7 +11,11 @@ export interface Element {
 }
 
 export function resistanceElement(a: number, b: number, r: number, alloc: Allocator, name: string): Element {
-  if (r === 0) {
+  if (a === b && isLink(r)) {
+    // both ends on one net: nothing flows, nothing to solve
+    return { load() {}, residual() {}, current: () => 0 };
+  }
+  if (isLink(r)) {
     const k = alloc.branch(name);
     return {
       load(s) {
@@ -39,6 +43,11 @@ export function resistanceElement(a: number, b: number, r: number, alloc: Alloca
     },
     current: (x) => g * (nodeV(x, a) - nodeV(x, b)),
   };
+}
+
+/** Topology edge for a resistance between pins 0 and 1. */
+export function resistanceEdge(r: number, a = 0, b = 1): TopologyEdge {
+  return isLink(r) ? { kind: 'voltage', a, b, value: 0, source: false } : { kind: 'resistive', a, b };
 }
 
 /** A linear two-pin part made of one resistance (resistor, NTC, LDR, switch, resistive load). */
@@ -78,8 +87,8 @@ export function junctionDevice(
   report?: Device['report'],
 ): Device {
   const [an, ca] = pins;
-  const j = seriesResistance > 0 ? alloc.internalNode(`${partId}:junction`) : an;
-  const rs = seriesResistance > 0 ? resistanceElement(an, j, seriesResistance, alloc, `${partId}:Rs`) : null;
+  const j = !isLink(seriesResistance) ? alloc.internalNode(`${partId}:junction`) : an;
+  const rs = !isLink(seriesResistance) ? resistanceElement(an, j, seriesResistance, alloc, `${partId}:Rs`) : null;
   let vold = 0;
   let cold = true;
   const nodes = [an, ca, ...(j !== an ? [j] : [])].filter((n) => n !== GROUND);

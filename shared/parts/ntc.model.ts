@@ -1,7 +1,7 @@
 import { celsiusToKelvin } from '../engine/constants';
 import type { DeviceModel } from '../engine/device';
 import type { ParamsOf } from '../sheet/schema';
-import { resistiveDevice } from './model-helpers';
+import { resistanceEdge, resistiveDevice } from './model-helpers';
 
 /** β equation: R(T) = R₀·exp(B·(1/T − 1/T₀)). */
 export function ntcBetaResistance(r0: number, t0K: number, beta: number, tK: number): number {
@@ -29,7 +29,7 @@ export function ntcResistance(p: ParamsOf<'ntc'>, temperatureC: number): number 
 }
 
 export const ntcModel: DeviceModel<ParamsOf<'ntc'>> = {
-  topology: () => [{ kind: 'resistive', a: 0, b: 1 }],
+  topology: (p, env) => [resistanceEdge(ntcResistance(p, env.temperatureC))],
   check(p, env) {
     const r = ntcResistance(p, env.temperatureC);
     return r > 0 && Number.isFinite(r) ? [] : [[p.steinhartHart ? 'steinhartHart' : 'beta', `gives no finite resistance at ${env.temperatureC} °C`]];

@@ -1,6 +1,6 @@
 import { GROUND, type DeviceModel } from '../engine/device';
 import type { ParamsOf } from '../sheet/schema';
-import { powerRatingWarnings, resistanceElement } from './model-helpers';
+import { powerRatingWarnings, resistanceEdge, resistanceElement } from './model-helpers';
 import { resistanceAt } from './resistor.model';
 
 /** Fraction of the track resistance between a and the wiper. */
@@ -22,10 +22,7 @@ function sections(p: ParamsOf<'potentiometer'>, temperatureC: number): [number, 
 export const potentiometerModel: DeviceModel<ParamsOf<'potentiometer'>> = {
   topology(p, env) {
     const [r1, r2] = sections(p, env.temperatureC);
-    return [
-      r1 === 0 ? { kind: 'voltage', a: 0, b: 1, value: 0, source: false } : { kind: 'resistive', a: 0, b: 1 },
-      r2 === 0 ? { kind: 'voltage', a: 1, b: 2, value: 0, source: false } : { kind: 'resistive', a: 1, b: 2 },
-    ];
+    return [resistanceEdge(r1, 0, 1), resistanceEdge(r2, 1, 2)];
   },
   check(p, env) {
     return resistanceAt(p.resistance, p.tempco, env.temperatureC) > 0 ? [] : [['tempco', `gives a non-positive resistance at ${env.temperatureC} °C`]];

@@ -1,5 +1,5 @@
 import type { DeviceModel } from '../engine/device';
-import { fmt, powerRatingWarnings, resistiveDevice } from './model-helpers';
+import { fmt, powerRatingWarnings, resistanceEdge, resistiveDevice } from './model-helpers';
 import type { ParamsOf } from '../sheet/schema';
 
 /** R(T) = R·(1 + tempco·1e-6·(T − 25 °C)) */
@@ -8,7 +8,7 @@ export function resistanceAt(r25: number, tempcoPpm: number, temperatureC: numbe
 }
 
 export const resistorModel: DeviceModel<ParamsOf<'resistor'>> = {
-  topology: () => [{ kind: 'resistive', a: 0, b: 1 }],
+  topology: (p, env) => [resistanceEdge(resistanceAt(p.resistance, p.tempco, env.temperatureC))],
   check(p, env) {
     const r = resistanceAt(p.resistance, p.tempco, env.temperatureC);
     return r > 0 ? [] : [['tempco', `gives a resistance of ${fmt(r, 'Ω')} at ${env.temperatureC} °C; check the temperature coefficient`]];

@@ -42,8 +42,9 @@ export function solveEbersMollBias(n: BiasNetwork, Is: number, VT: number, betaR
   };
   // residuals: f1 = vbb − ib·rb − ie·re − vbe, f2 = (vbb − ib·rb) − (vcc − ic·rc) − vbc
   let vbe = 0.6;
-  let vbc = -1;
-  for (let it = 0; it < 200; it++) {
+  let vbc = vbb - n.vcc; // the collector starts near the supply
+  let converged = false;
+  for (let it = 0; it < 2000; it++) {
     const c = currents(vbe, vbc);
     const f1 = vbb - c.ib * rb - c.ie * n.re - vbe;
     const f2 = vbb - c.ib * rb - (n.vcc - c.ic * n.rc) - vbc;
@@ -58,16 +59,20 @@ export function solveEbersMollBias(n: BiasNetwork, Is: number, VT: number, betaR
     const det = j11 * j22 - j12 * j21;
     let d1 = (-f1 * j22 + f2 * j12) / det;
     let d2 = (-f2 * j11 + f1 * j21) / det;
-    // damping: keep junction steps below 2·V_T near conduction
-    const s = Math.max(Math.abs(d1), Math.abs(d2)) / 0.05;
+    // damping: keep the base-emitter step below 50 mV (the exponential's linearisation range)
+    const s = Math.abs(d1) / 0.05;
     if (s > 1) {
       d1 /= s;
       d2 /= s;
     }
     vbe += d1;
     vbc += d2;
-    if (Math.abs(d1) < 1e-15 && Math.abs(d2) < 1e-15) break;
+    if (Math.abs(d1) < 1e-15 && Math.abs(d2) < 1e-14) {
+      converged = true;
+      break;
+    }
   }
+  if (!converged) throw new Error('reference Ebers–Moll solve did not converge');
   const c = currents(vbe, vbc);
   const vb = vbb - c.ib * rb;
   const ve = c.ie * n.re;

@@ -1,0 +1,144 @@
+// Parameter sweeps: one parameter, or two nested (the first is the outer loop). Every point is
+// warm-started from the previous converged one; a two-parameter sweep walks the inner axis back
+// and forth (serpentine) so consecutive points are neighbours, while the table stays in
+// row-major order (outer index × inner count + inner index).
+import type { CircuitSolveOptions } from '../engine/compile';
+import type { SolveSuccess } from '../engine/result';
+import { controller, type RunControl } from './control';
+import { prepareCircuit, solveOrThrow, solvePoint, type PreparedCircuit } from './evaluate';
+import { stepValues, type StepSpec } from './steps';
+import { AnalysisInputError, resolveTarget, solveOptionsFor, type ParamTarget } from './targets';
+
+export interface SweepAxis {
+  target: ParamTarget;
+  steps: StepSpec;
+}
+
+export interface SweepSpec {
+  /** one axis, or [outer, inner] */
+  axes: readonly [SweepAxis] | readonly [SweepAxis, SweepAxis];
+  /** fixed overrides applied at every point (e.g. from --set) */
+  base?: CircuitSolveOptions;
+}
+
+export interface SweepPointError {
+  point: number;
+  /** the axis values at the failed point */
+  at: number[];
+  code: string;
+  message: string;
+}
+
+/** Columnar sweep result; NaN where a point failed. */
+export interface SweepTable {
+  axes: Array<{ key: string; unit: string; values: number[] }>;
+  points: number;
+  /** the value of each axis at each point (one column per axis) */
+  axisColumns: Float64Array[];
+  /** "V(net)", "I(part.pin)", "P(part)" → one value per point */
+  columns: Record<string, Float64Array>;
+  units: Record<string, string>;
+  ok: Uint8Array;
+  iterations: Int32Array;
+  errors: SweepPointError[];
+  /** points solved before a stop request (= points when not stopped) */
+  completed: number;
+  stopped: boolean;
+}
+
+type Reader = (r: SolveSuccess) => number;
+
+function columnsFrom(r: SolveSuccess, points: number): { names: string[]; units: string[]; readers: Reader[]; data: Float64Array[] } {
+  const names: string[] = [];
+  const units: string[] = [];
+  const readers: Reader[] = [];
+  for (const net of Object.keys(r.nets)) {
+    names.push(`V(${net})`);
+    units.push('V');
+    readers.push((s) => s.nets[net] ?? NaN);
+  }
+  for (const [id, pr] of Object.entries(r.parts)) {
+    for (const pin of Object.keys(pr.pinCurrents)) {
+      names.push(`I(${id}.${pin})`);
+      units.push('A');
+      readers.push((s) => s.parts[id]?.pinCurrents[pin] ?? NaN);
+    }
+    names.push(`P(${id})`);
+    units.push('W');
+    readers.push((s) => s.parts[id]?.power ?? NaN);
+  }
+  return { names, units, readers, data: names.map(() => new Float64Array(points).fill(NaN)) };
+}
+
+/**
+ * Run a sweep on a prepared circuit (or a sheet). Synchronous; cancellable through `control`.
+ * @throws AnalysisInputError for a bad axis, CircuitFailureError when the nominal sheet cannot be solved
+ */
+export function runSweep(circuit: PreparedCircuit | unknown, spec: SweepSpec, control?: RunControl): SweepTable {
+  const p = isPrepared(circuit) ? circuit : prepareCircuit(circuit);
+  if (spec.axes.length < 1 || spec.axes.length > 2) throw new AnalysisInputError('A sweep has one or two axes.');
+  const resolved = spec.axes.map((a) => resolveTarget(p.sheet, a.target));
+  if (resolved.length === 2 && resolved[0].key === resolved[1].key) throw new AnalysisInputError(`Both sweep axes vary ${resolved[0].key}; choose two different parameters.`);
+  const axisValues = spec.axes.map((a, i) => stepValues(a.steps, `sweep of ${resolved[i].key}`));
+  const outer = axisValues[0];
+  const inner = axisValues[1] ?? Float64Array.of(NaN);
+  const nOuter = outer.length;
+  const nInner = axisValues.length === 2 ? inner.length : 1;
+  const points = nOuter * nInner;
+  const targets = spec.axes.map((a) => a.target);
+
+  // a nominal solve fixes the columns (and is the first warm start)
+  const nominal = solveOrThrow(p, spec.base ?? {}, false);
+  const cols = columnsFrom(nominal, points);
+  const axisColumns = axisValues.map(() => new Float64Array(points));
+  const ok = new Uint8Array(points);
+  const iterations = new Int32Array(points);
+  const errors: SweepPointError[] = [];
+  const ctl = controller(control, points);
+  const vals = new Float64Array(targets.length);
+  let done = 0;
+  let stopped = false;
+  outerLoop: for (let i = 0; i < nOuter; i++) {
+    for (let jj = 0; jj < nInner; jj++) {
+      const j = i % 2 === 0 ? jj : nInner - 1 - jj;
+      const point = i * nInner + j;
+      vals[0] = outer[i];
+      if (nInner > 1 || axisValues.length === 2) vals[1] = inner[j];
+      for (let a = 0; a < targets.length; a++) axisColumns[a][point] = vals[a];
+      const r = solvePoint(p, solveOptionsFor(targets, vals, spec.base));
+      if (r.ok) {
+        ok[point] = 1;
+        iterations[point] = r.iterations;
+        for (let c = 0; c < cols.readers.length; c++) cols.data[c][point] = cols.readers[c](r);
+      } else errors.push({ point, at: Array.from(vals), code: r.error.code, message: r.error.message });
+      done++;
+      if (ctl.tick(done)) {
+        stopped = true;
+        break outerLoop;
+      }
+    }
+  }
+  const columns: Record<string, Float64Array> = {};
+  const units: Record<string, string> = {};
+  cols.names.forEach((n, k) => {
+    columns[n] = cols.data[k];
+    units[n] = cols.units[k];
+  });
+  errors.sort((a, b) => a.point - b.point);
+  return {
+    axes: resolved.map((r, i) => ({ key: r.key, unit: r.unit, values: Array.from(axisValues[i]) })),
+    points,
+    axisColumns,
+    columns,
+    units,
+    ok,
+    iterations,
+    errors,
+    completed: done,
+    stopped,
+  };
+}
+
+export function isPrepared(x: unknown): x is PreparedCircuit {
+  return typeof x === 'object' && x !== null && 'compiled' in x && 'nets' in x && 'sheet' in x;
+}
