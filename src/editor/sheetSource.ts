@@ -48,8 +48,8 @@ export interface SheetSource {
 
 /**
  * Maps the `:id` of `/sheets/:id` to a source, or returns null when the id is not this
- * resolver's. Resolvers are asked in registration order; the built-in ones (local, example-*)
- * come first.
+ * resolver's. Resolvers are asked in registration order and the first match wins; the ids
+ * "local" and "example-<name>" belong to the built-in sources (src/editor/sources/).
  */
 export type SheetSourceResolver = (routeId: string) => SheetSource | null;
 

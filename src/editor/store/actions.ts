@@ -9,6 +9,7 @@ import {
   copyFragment,
   deleteItems,
   designatorProblem,
+  joinTouchingPins,
   moveParts,
   pasteFragment,
   renamePart,
@@ -33,6 +34,8 @@ export interface EditorActions {
   connect(from: string, to: string): ConnectResult;
   /** Set one param in SI units; `undefined` removes an optional param. */
   setParam(partId: string, name: string, value: unknown, label?: string): void;
+  /** Set several params in one undo step (a value typed with its tolerance, "4K7J"). */
+  setParams(partId: string, values: Record<string, unknown>, label?: string): void;
   /** Start a continuous change (slider): the setParam calls until endContinuous are one undo step. */
   beginContinuous(label: string): void;
   endContinuous(): void;
@@ -66,6 +69,7 @@ function plural(n: number, one: string): string {
 export function createEditor(sheet: Sheet): Editor {
   const editor = createEditorStore(sheet);
   let clipboard: Fragment | null = null;
+  let dragged = new Set<string>();
   let pasteCount = 0;
   const selection = () => editor.getSession().selection;
   const selectOnly = (parts: string[], wires: string[] = []) =>
@@ -76,17 +80,25 @@ export function createEditor(sheet: Sheet): Editor {
   const actions: EditorActions = {
     place(type, center, rotation = 0) {
       let id: string | null = null;
-      const b = editor.applyLocal((d) => void (id = addPart(d, type, center, rotation)), `Place ${type.replace(/_/g, ' ')}`);
+      const b = editor.applyLocal((d) => {
+        id = addPart(d, type, center, rotation);
+        joinTouchingPins(d, [id]);
+      }, `Place ${type.replace(/_/g, ' ')}`);
       if (b && id) selectOnly([id]);
       return b ? id : null;
     },
     beginDrag(count) {
+      dragged = new Set();
       editor.beginGesture(`Move ${plural(count, 'part')}`);
     },
     moveParts(centers) {
-      editor.applyLocal((d) => moveParts(d, centers), `Move ${plural(Object.keys(centers).length, 'part')}`);
+      const b = editor.applyLocal((d) => moveParts(d, centers), `Move ${plural(Object.keys(centers).length, 'part')}`);
+      if (b) for (const id of Object.keys(centers)) dragged.add(id);
     },
     endDrag() {
+      // joining pins the drag brought together belongs to the same undo step as the drag
+      if (dragged.size) editor.applyLocal((d) => void joinTouchingPins(d, [...dragged]), 'Join touching pins');
+      dragged = new Set();
       editor.endGesture();
     },
     rotateSelection(direction = 1) {
@@ -110,6 +122,11 @@ export function createEditor(sheet: Sheet): Editor {
     },
     setParam(partId, name, value, label) {
       editor.applyLocal((d) => setParam(d, partId, name, value), label ?? `Set ${partId} ${name}`);
+    },
+    setParams(partId, values, label) {
+      editor.applyLocal((d) => {
+        for (const [name, value] of Object.entries(values)) setParam(d, partId, name, value);
+      }, label ?? `Set ${partId} ${Object.keys(values).join(', ')}`);
     },
     beginContinuous(label) {
       editor.beginGesture(label);
@@ -158,7 +175,10 @@ export function createEditor(sheet: Sheet): Editor {
       pasteCount += 1;
       const offset = { x: 2 * GRID * pasteCount, y: 2 * GRID * pasteCount };
       let ids: string[] = [];
-      editor.applyLocal((d) => void (ids = pasteFragment(d, src, offset)), `Paste ${plural(src.parts.length, 'part')}`);
+      editor.applyLocal((d) => {
+        ids = pasteFragment(d, src, offset);
+        joinTouchingPins(d, ids);
+      }, `Paste ${plural(src.parts.length, 'part')}`);
       if (ids.length) selectOnly(ids);
       return ids;
     },

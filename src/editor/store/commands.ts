@@ -3,7 +3,7 @@
 import type { Draft } from 'immer';
 import { nextPartId, splitPinRef, type Part, type PartType, type Position, type Rotation, type Sheet, type Wire } from '../../../shared/sheet';
 import { partSpecs } from '../../../shared/parts/specs';
-import { GRID, rotateOffset, snapToGrid } from '../symbols/geometry';
+import { GRID, pinPosition, rotateOffset, snapToGrid, SYMBOL_GEOMETRY } from '../symbols/geometry';
 import { placementParams } from '../model/placementDefaults';
 import { newWireId } from './normalize';
 
@@ -173,4 +173,29 @@ export function renamePart(d: D, current: string, next: string): void {
     w.from = mapRef(w.from);
     w.to = mapRef(w.to);
   }
+}
+
+/**
+ * Wire together pins that sit on the same grid point when one of them belongs to `partIds`
+ * (the parts just placed or moved), so pins that look joined are joined. Returns the wire count added.
+ */
+export function joinTouchingPins(d: D, partIds: readonly string[]): number {
+  const moved = new Set(partIds);
+  const at = new Map<string, string[]>();
+  for (const p of d.parts) {
+    for (const pin of Object.keys(SYMBOL_GEOMETRY[p.type].pins)) {
+      const pos = pinPosition(p.type, pin, p.position ?? { x: 0, y: 0 }, p.rotation ?? 0)!;
+      const key = `${pos.x},${pos.y}`;
+      const list = at.get(key) ?? [];
+      list.push(`${p.id}.${pin}`);
+      at.set(key, list);
+    }
+  }
+  let added = 0;
+  for (const refs of at.values()) {
+    if (refs.length < 2 || !refs.some((r) => moved.has(r.slice(0, r.indexOf('.'))))) continue;
+    // chain them: a-b, b-c, … (skipping pairs already joined by a wire)
+    for (let i = 1; i < refs.length; i++) if (connectPins(d, refs[i - 1], refs[i]).ok) added++;
+  }
+  return added;
 }

@@ -189,3 +189,27 @@ describe('copy and paste', () => {
     expect(ed.actions.paste()).toEqual(['R2']);
   });
 });
+
+describe('touching pins', () => {
+  it('joins pins a drag lands on the same point, in the same undo step as the drag', () => {
+    const ed = createEditor(emptySheet());
+    ed.actions.place('resistor', { x: 100, y: 100 });
+    ed.actions.place('resistor', { x: 300, y: 100 });
+    expect(ed.getDoc().wires).toHaveLength(0);
+    ed.actions.beginDrag(1);
+    ed.actions.moveParts({ R2: { x: 240, y: 100 } });
+    ed.actions.moveParts({ R2: { x: 180, y: 100 } });
+    ed.actions.endDrag();
+    expect(ed.getDoc().wires.map((w) => `${w.from}-${w.to}`)).toEqual(['R1.b-R2.a']);
+    ed.actions.undo();
+    expect(ed.getDoc().wires).toHaveLength(0);
+    expect(partOf(ed, 'R2').position).toEqual({ x: 300, y: 100 });
+  });
+
+  it('joins a part placed with a pin on another part\'s pin', () => {
+    const ed = createEditor(emptySheet());
+    ed.actions.place('resistor', { x: 100, y: 100 });
+    ed.actions.place('ground', { x: 140, y: 120 });
+    expect(ed.getDoc().wires.map((w) => `${w.from}-${w.to}`)).toEqual(['R1.b-GND1.g']);
+  });
+});
