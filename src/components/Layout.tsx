@@ -1,5 +1,6 @@
 import { Link, NavLink, Outlet } from 'react-router-dom';
 import { ThemeToggle } from './ThemeToggle';
+import { AccountMenu } from '../cloud/AccountMenu';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
   `px-2 py-1 rounded text-sm ${isActive ? 'text-ink font-medium bg-sunken' : 'text-ink-muted hover:text-ink'}`;
@@ -15,8 +16,10 @@ export function Layout() {
         <nav className="flex items-center gap-1" aria-label="Main">
           <NavLink to="/" end className={navClass}>Home</NavLink>
           <NavLink to="/sheets/local" className={navClass}>Local sheet</NavLink>
+          <NavLink to="/projects" className={navClass}>Projects</NavLink>
         </nav>
         <div className="ml-auto flex items-center gap-2">
+          <AccountMenu />
           <ThemeToggle />
         </div>
       </header>
