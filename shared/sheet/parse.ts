@@ -46,7 +46,11 @@ export function describeValue(v: unknown): string {
 
 /** Why `value` is not acceptable for param `info`, or null when it is fine. */
 export function paramProblem(info: ParamInfo, value: unknown): string | null {
-  if (value === undefined) return info.required ? 'is required' : null;
+  if (value === undefined) {
+    if (!info.required) return null;
+    if (info.kind === 'enum') return `is required: one of ${(info.enumValues ?? []).map((s) => JSON.stringify(s)).join(', ')}`;
+    return `is required${info.unit ? ` (a number in ${info.unit})` : ''}`;
+  }
   switch (info.kind) {
     case 'number': {
       if (typeof value !== 'number' || !Number.isFinite(value)) {
