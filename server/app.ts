@@ -1,4 +1,4 @@
-import express, { type Express } from 'express';
+import express, { type Express, type RequestHandler } from 'express';
 import { usesRealOAuth, type Config } from './config';
 import type { Database } from './db/client';
 import { healthRouter } from './routes/health';
@@ -34,6 +34,14 @@ export interface AppDeps {
 /** Largest JSON body the API reads; a sheet of a few hundred parts is well under 100 kB. */
 export const JSON_LIMIT = '1mb';
 
+/**
+ * The session cookie → `req.user` chain of an app made by `createApp`, for reuse outside Express
+ * routes, e.g. `for (const h of sessionHandlersOf(app)) io.engine.use(h)` for socket.io.
+ */
+export function sessionHandlersOf(app: Express): RequestHandler[] {
+  return app.locals.sessionHandlers as RequestHandler[];
+}
+
 /** Builds the Express app without listening, so tests can drive it with supertest. */
 export function createApp(deps: AppDeps): Express {
   const { config, database } = deps;
@@ -44,6 +52,8 @@ export function createApp(deps: AppDeps): Express {
   app.set('trust proxy', 'loopback');
   app.use(securityHeaders(config));
 
+  // API answers are per-person: never let a shared cache keep them.
+  app.use('/api', (_req, res, next) => { res.setHeader('Cache-Control', 'no-store'); next(); });
   app.use('/api', healthRouter(database));
   if (!usesRealOAuth(config)) app.use('/fake-oauth', fakeProviderRouter());
   if (mail?.toSink) app.use('/dev', mailboxRouter(db));
@@ -51,9 +61,9 @@ export function createApp(deps: AppDeps): Express {
   const sessions = createSessions(config, database);
   const passport = createPassport(db);
   const csrf = createCsrf();
-  app.use(sessions.middleware);
-  app.use(passport.initialize());
-  app.use(passport.session());
+  const sessionHandlers: RequestHandler[] = [sessions.middleware, passport.initialize(), passport.session()];
+  app.locals.sessionHandlers = sessionHandlers;
+  app.use(sessionHandlers);
   app.use(express.json({ limit: JSON_LIMIT }));
 
   app.use('/auth/logout', csrf.protect);

@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { eq, sql } from 'drizzle-orm';
 import { users } from '../../server/db/schema';
-import { createApp } from '../../server/app';
+import express from 'express';
+import { createApp, sessionHandlersOf } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { fetchCsrf, signIn, signInAgent } from '../support/auth';
 import { startTestApp, type TestApp } from './test-app';
@@ -166,6 +167,18 @@ describe('the fake provider itself', () => {
   it('tells the sign-in page which provider is in use', async () => {
     const res = await request(s.app).get('/api/auth/providers');
     expect(res.body).toEqual({ mode: 'fake', demoLogins: ['ada-demo', 'ben-demo', 'chen-demo'] });
+  });
+});
+
+describe('session handlers for other transports', () => {
+  it('resolve the signed-in user from the session cookie outside the app’s own routes', async () => {
+    const agent = request.agent(s.app);
+    const { cookie } = await signInAgent(agent, 'chen-demo');
+    const other = express();
+    other.use(sessionHandlersOf(s.app));
+    other.get('/who', (req, res) => { res.json(req.user ?? null); });
+    expect((await request(other).get('/who').set('Cookie', cookie)).body).toMatchObject({ login: 'chen-demo' });
+    expect((await request(other).get('/who')).body).toBeNull();
   });
 });
 
