@@ -7,7 +7,7 @@ import { extractNets, type NetList } from '../sheet/nets';
 import { pinKey, type Conditions, type Part, type Sheet } from '../sheet/schema';
 import { celsiusToKelvin, thermalVoltage } from './constants';
 import { GROUND, type Device, type DeviceEnv, type TopologyEdge } from './device';
-import { createLinearSystem, type LinearSolverKind, type LinearSystem } from './linear/index';
+import { createLinearSystem, type LinearSolverKind, type LinearSystem, type LinearSystemFactory } from './linear/index';
 import { MnaCircuit, deviceMovement, UNKNOWN_BRANCH, UNKNOWN_NODE, type NewtonOutcome, type NewtonRun } from './newton';
 import { failure, type PartResult, type SolveErrorInfo, type SolveFailure, type SolveResult, type SolveStrategy, type SolveSuccess, type SolveWarning } from './result';
 import { checkTopology, type PartTopology } from './topology';
@@ -29,8 +29,8 @@ export interface SolveOptions {
   gminStepping?: boolean;
   /** try source stepping when gmin stepping fails (default true) */
   sourceStepping?: boolean;
-  /** 'auto' (dense up to 150 unknowns, band LU above), 'dense' or 'band' */
-  linearSolver?: LinearSolverKind;
+  /** 'auto' (dense ml-matrix LU up to 150 unknowns, sparse LU above), 'dense', 'band', 'sparse', or a factory */
+  linearSolver?: LinearSolverKind | LinearSystemFactory;
 }
 
 export type ParamOverrides = Record<string, Record<string, number | boolean>>;
@@ -68,7 +68,7 @@ const DEFAULTS = {
   maxTotalIterations: 3000,
   gminStepping: true,
   sourceStepping: true,
-  linearSolver: 'auto' as LinearSolverKind,
+  linearSolver: 'auto' as LinearSolverKind | LinearSystemFactory,
 };
 
 interface Instance {

@@ -21,7 +21,7 @@ export interface LinearSystem {
   solve(): Float64Array | SingularInfo;
 }
 
-export type LinearSolverKind = 'auto' | 'dense' | 'band';
+export type LinearSolverKind = 'auto' | 'dense' | 'band' | 'sparse';
 
 export interface LinearSystemFactory {
   readonly name: string;
