@@ -30,6 +30,14 @@ function isObject(v: unknown): v is JsonObject {
   return typeof v === 'object' && v !== null && !Array.isArray(v);
 }
 
+/**
+ * Values are copied in: the operation stays a record of what was sent (it is logged, re-applied
+ * on rebase, and may be frozen), and later operations of the batch may change the copy.
+ */
+function copy<T extends Json>(value: T): T {
+  return typeof value === 'object' && value !== null ? (structuredClone(value) as T) : value;
+}
+
 function listOf(doc: Doc, coll: Collection): Element[] {
   const list = doc[coll];
   if (list === undefined) {
@@ -89,7 +97,7 @@ function targetObject(doc: Doc, op: Extract<SheetOp, { op: 'set' | 'unset' }>): 
   return find(doc, op.target);
 }
 
-function applyOne(doc: Doc, op: SheetOp): Doc {
+function applyOne(doc: Doc, op: Exclude<SheetOp, { op: 'replaceSheet' }>): void {
   switch (op.op) {
     case 'insert': {
       const id = op.value.id;
@@ -101,29 +109,29 @@ function applyOne(doc: Doc, op: SheetOp): Doc {
         requirePinPart(doc, op.value.from, id);
         requirePinPart(doc, op.value.to, id);
       }
-      list.splice(slotAfter(list, op.after), 0, op.value);
-      return doc;
+      list.splice(slotAfter(list, op.after), 0, copy(op.value));
+      return;
     }
     case 'remove': {
       const list = listOf(doc, op.coll);
       const i = indexOfId(list, op.id);
-      if (i < 0) return doc;
+      if (i < 0) return;
       list.splice(i, 1);
       if (op.coll === 'parts') {
         const wires = listOf(doc, 'wires');
         for (let w = wires.length - 1; w >= 0; w--)
           if (partOfPin(wires[w]?.from) === op.id || partOfPin(wires[w]?.to) === op.id) wires.splice(w, 1);
       }
-      return doc;
+      return;
     }
     case 'move': {
       const list = listOf(doc, op.coll);
       const i = indexOfId(list, op.id);
       if (i < 0) throw new OpError('conflict', `The ${describeElement(op)} is no longer on the sheet (someone removed it).`);
-      if (op.after === op.id) return doc;
+      if (op.after === op.id) return;
       const [el] = list.splice(i, 1);
       list.splice(slotAfter(list, op.after), 0, el);
-      return doc;
+      return;
     }
     case 'set': {
       let obj = targetObject(doc, op);
@@ -135,39 +143,55 @@ function applyOne(doc: Doc, op: SheetOp): Doc {
         else if (!isObject(next)) throw new OpError('conflict', `Field "${op.path.join('.')}" cannot be set: "${key}" is not an object.`);
         obj = obj[key] as Element;
       }
-      obj[op.path[op.path.length - 1]] = op.value;
-      return doc;
+      obj[op.path[op.path.length - 1]] = copy(op.value);
+      return;
     }
     case 'unset': {
       let obj: Json | undefined = targetObject(doc, op);
       for (const key of op.path.slice(0, -1)) {
         obj = isObject(obj) ? obj[key] : undefined;
-        if (!isObject(obj)) return doc;
+        if (!isObject(obj)) return;
       }
       if (isObject(obj)) delete obj[op.path[op.path.length - 1]];
-      return doc;
+      return;
     }
-    case 'replaceSheet':
-      if (!isObject(op.sheet)) throw new OpError('invalid_request', 'replaceSheet needs a sheet object.');
-      return normalizeForSync(op.sheet);
   }
 }
 
+function failAt(err: unknown, opIndex: number): never {
+  if (err instanceof OpError) throw Object.assign(err, { opIndex });
+  throw err;
+}
+
 function run<D extends object>(doc: D, ops: readonly SheetOp[], lenient: boolean, skipped: number[]): D {
-  return produce(doc, (draft: Draft<D>) => {
-    let d = draft as unknown as Doc;
-    ops.forEach((op, i) => {
-      try {
-        d = applyOne(d, op);
-      } catch (err) {
-        if (!(err instanceof OpError)) throw err;
-        if (!lenient) throw Object.assign(err, { opIndex: i });
-        skipped.push(i);
+  let current = doc;
+  let i = 0;
+  while (i < ops.length) {
+    const op = ops[i];
+    if (op.op === 'replaceSheet') {
+      if (isObject(op.sheet)) current = normalizeForSync(op.sheet) as unknown as D;
+      else if (lenient) skipped.push(i);
+      else failAt(new OpError('invalid_request', 'replaceSheet needs a sheet object.'), i);
+      i++;
+      continue;
+    }
+    // Consecutive element and field operations share one immer draft.
+    let end = i;
+    while (end < ops.length && ops[end].op !== 'replaceSheet') end++;
+    const from = i;
+    current = produce(current, (draft: Draft<D>) => {
+      for (let k = from; k < end; k++) {
+        try {
+          applyOne(draft as unknown as Doc, ops[k] as Exclude<SheetOp, { op: 'replaceSheet' }>);
+        } catch (err) {
+          if (lenient && err instanceof OpError) skipped.push(k);
+          else failAt(err, k);
+        }
       }
-    });
-    // A replaceSheet swaps the root; immer takes a returned value as the new state.
-    return d === (draft as unknown as Doc) ? undefined : (d as unknown as D);
-  }) as D;
+    }) as D;
+    i = end;
+  }
+  return current;
 }
 
 /**
