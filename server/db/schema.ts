@@ -118,9 +118,15 @@ export const sheetOps = pgTable(
     version: integer('version').notNull(),
     authorId: integer('author_id').references(() => users.id, { onDelete: 'set null' }),
     ops: jsonb('ops').notNull(),
+    /** The client's id for a live batch (shared/sync/protocol.ts): a batch re-sent after a reconnect is committed once. Null for REST changes. */
+    batchId: text('batch_id'),
     createdAt: createdAt(),
   },
-  (t) => [unique('sheet_ops_project_version_key').on(t.projectId, t.version), check('sheet_ops_version_positive', sql`${t.version} > 0`)],
+  (t) => [
+    unique('sheet_ops_project_version_key').on(t.projectId, t.version),
+    check('sheet_ops_version_positive', sql`${t.version} > 0`),
+    uniqueIndex('sheet_ops_project_batch_idx').on(t.projectId, t.batchId),
+  ],
 );
 
 const bytea = customType<{ data: Buffer }>({ dataType: () => 'bytea' });
