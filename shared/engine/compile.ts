@@ -56,8 +56,25 @@ export interface CompiledCircuit {
   /** unknowns in the base MNA system (nodes + internal nodes + branch currents) */
   readonly unknowns: number;
   readonly linearSolverName: string;
+  /** names of the nets in the solve, in result order (empty when the sheet could not be compiled) */
+  readonly netNames: string[];
+  /** solve and build the full result */
   solve(opts?: CircuitSolveOptions): SolveResult;
+  /**
+   * Solve without building the result object (for sweeps and Monte Carlo); read what you need
+   * with the accessors below, which refer to the last successful solve or solveRaw.
+   */
+  solveRaw(opts?: CircuitSolveOptions): RawSolveResult;
+  /** voltage of a net by name, V (throws when there is no solution yet or no such net) */
+  netVoltage(net: string): number;
+  pinVoltage(partId: string, pin: string): number;
+  /** current INTO the pin, A */
+  pinCurrent(partId: string, pin: string): number;
+  /** power absorbed by the part, W */
+  partPower(partId: string): number;
 }
+
+export type RawSolveResult = { ok: true; iterations: number } | SolveFailure;
 
 const DEFAULTS = {
   reltol: 1e-6,
@@ -75,9 +92,15 @@ interface Instance {
   devices: Device[];
   /** device per part id (excluded parts and connectors have none) */
   deviceById: Map<string, Device>;
+  /** position of each part's device in `devices` */
+  deviceIndex: Map<string, number>;
   kinds: Uint8Array;
   circuit: MnaCircuit;
   signature: string;
+  /** topology edges per part, as checked */
+  topo: Map<string, TopologyEdge[]>;
+  /** unknowns each part's device allocated, in order */
+  allocs: Map<string, Array<{ kind: number; index: number }>>;
 }
 
 interface BaseInfo {
@@ -195,6 +218,7 @@ function instantiate(
   // physical checks and topology
   const issues: SheetIssue[] = [];
   const topo: PartTopology[] = [];
+  const topoById = new Map<string, TopologyEdge[]>();
   const envs = new Map<string, DeviceEnv>();
   for (const part of base.solved) {
     const def: PartDefinition = partCatalog[part.type];
@@ -205,6 +229,7 @@ function instantiate(
       issues.push({ path: `parts.${part.id}.params.${field}`, partId: part.id, field, message: `Part "${part.id}" (${part.type}): field "${field}" ${msg}.` });
     const pinNets = def.pins.map((p) => nets.pinToIndex.get(pinKey(part.id, p.name))!);
     const edges: TopologyEdge[] = def.model.topology(params, env);
+    topoById.set(part.id, edges);
     const vt = valueText(part, params);
     topo.push({ partId: part.id, type: part.type, pinNets, edges, ...(vt ? { valueText: vt } : {}) });
   }
@@ -232,25 +257,33 @@ function instantiate(
   const kinds: number[] = [];
   for (let i = 0; i < netUnknown.length; i++) if (netUnknown[i] !== GROUND) kinds.push(UNKNOWN_NODE);
   const names: string[] = [];
+  let log: Array<{ kind: number; index: number }> = [];
   const alloc = {
     internalNode(name: string) {
       kinds.push(UNKNOWN_NODE);
       names.push('n:' + name);
+      log.push({ kind: UNKNOWN_NODE, index: kinds.length - 1 });
       return kinds.length - 1;
     },
     branch(name: string) {
       kinds.push(UNKNOWN_BRANCH);
       names.push('b:' + name);
+      log.push({ kind: UNKNOWN_BRANCH, index: kinds.length - 1 });
       return kinds.length - 1;
     },
   };
   const devices: Device[] = [];
   const deviceById = new Map<string, Device>();
+  const deviceIndex = new Map<string, number>();
+  const allocs = new Map<string, Array<{ kind: number; index: number }>>();
   for (const part of base.solved) {
     if (part.type === 'ground' || part.type === 'net_label') continue;
     const def = partCatalog[part.type];
     const pins = def.pins.map((p) => netUnknown[nets.pinToIndex.get(pinKey(part.id, p.name))!]);
+    log = [];
     const dev = def.model.create({ partId: part.id, params: paramsOf(part), env: envs.get(part.id)!, pins, alloc });
+    allocs.set(part.id, log);
+    deviceIndex.set(part.id, devices.length);
     devices.push(dev);
     deviceById.set(part.id, dev);
   }
@@ -264,10 +297,80 @@ function instantiate(
   const signature = `${size}:${names.join(',')}:${pattern.length}:${h}`;
   const system = reuse && reuse.signature === signature ? reuse.system : createLinearSystem(opts.linearSolver, size, pattern);
   const circuit = new MnaCircuit(size, kindArr, devices, system, opts);
-  return { ok: true, inst: { devices, deviceById, kinds: kindArr, circuit, signature } };
+  return { ok: true, inst: { devices, deviceById, deviceIndex, kinds: kindArr, circuit, signature, topo: topoById, allocs } };
+}
+
+function sameTopology(a: TopologyEdge[], b: TopologyEdge[] | undefined): boolean {
+  if (!b || a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i].kind !== b[i].kind || a[i].a !== b[i].a || a[i].b !== b[i].b) return false;
+  return true;
+}
+
+/**
+ * The cheap path for overrides: re-create only the devices of `changed` parts on the base
+ * structure. Returns null when a change alters the structure (a section becoming a 0 Ω link, a
+ * series resistance appearing), so the caller rebuilds everything.
+ */
+function patchInstance(
+  base: BaseInfo,
+  baseInst: Instance,
+  changed: Iterable<Part>,
+  paramsOf: (p: Part) => Record<string, unknown>,
+  cond: { temperatureC: number; illuminanceLux: number },
+  opts: typeof DEFAULTS,
+): { ok: true; inst: Instance } | { ok: false; error: SolveErrorInfo } | null {
+  const issues: SheetIssue[] = [];
+  const devices = baseInst.devices.slice();
+  const deviceById = new Map(baseInst.deviceById);
+  for (const part of changed) {
+    if (base.excluded.has(part.id) || part.type === 'ground' || part.type === 'net_label') continue;
+    const def = partCatalog[part.type];
+    const params = paramsOf(part);
+    const env = envFor(part, params, cond);
+    for (const [field, msg] of def.model.check?.(params, env) ?? [])
+      issues.push({ path: `parts.${part.id}.params.${field}`, partId: part.id, field, message: `Part "${part.id}" (${part.type}): field "${field}" ${msg}.` });
+    if (issues.length) continue;
+    if (!sameTopology(def.model.topology(params, env), baseInst.topo.get(part.id))) return null;
+    const rec = baseInst.allocs.get(part.id) ?? [];
+    let k = 0;
+    let mismatch = false;
+    const replay = (kind: number) => {
+      const r = rec[k++];
+      if (!r || r.kind !== kind) {
+        mismatch = true;
+        return 0;
+      }
+      return r.index;
+    };
+    const pins = def.pins.map((p) => base.netUnknown[base.nets.pinToIndex.get(pinKey(part.id, p.name))!]);
+    const dev = def.model.create({ partId: part.id, params, env, pins, alloc: { internalNode: () => replay(UNKNOWN_NODE), branch: () => replay(UNKNOWN_BRANCH) } });
+    if (mismatch || k !== rec.length) return null;
+    devices[baseInst.deviceIndex.get(part.id)!] = dev;
+    deviceById.set(part.id, dev);
+  }
+  if (issues.length)
+    return {
+      ok: false,
+      error: {
+        code: 'invalid_parameter',
+        message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message,
+        parts: [...new Set(issues.map((i) => i.partId!))],
+        nets: [],
+        issues,
+      },
+    };
+  const circuit = new MnaCircuit(baseInst.circuit.size, baseInst.kinds, devices, baseInst.circuit.system, opts);
+  return { ok: true, inst: { ...baseInst, devices, deviceById, circuit } };
 }
 
 const results = new WeakMap<object, Float64Array>();
+
+function failedCircuit(sheet: Sheet | undefined, netList: NetList | undefined, err: SolveFailure): CompiledCircuit {
+  const none = (): never => {
+    throw new Error(`no solution: ${err.error.message}`);
+  };
+  return { sheet, netList, error: err, unknowns: 0, linearSolverName: '', netNames: [], solve: () => err, solveRaw: () => err, netVoltage: none, pinVoltage: none, pinCurrent: none, partPower: none };
+}
 
 export function compileCircuit(input: Sheet | unknown, options: SolveOptions = {}): CompiledCircuit {
   const opts = { ...DEFAULTS, ...stripUndefined(options) };
@@ -275,7 +378,7 @@ export function compileCircuit(input: Sheet | unknown, options: SolveOptions = {
     return compileInner(input, opts);
   } catch (e) {
     const err = failure({ code: 'internal_error', message: `The solver hit an internal error: ${e instanceof Error ? e.message : String(e)}. Please report this sheet.`, parts: [], nets: [] });
-    return { sheet: undefined, netList: undefined, error: err, unknowns: 0, linearSolverName: '', solve: () => err };
+    return failedCircuit(undefined, undefined, err);
   }
 }
 
@@ -293,7 +396,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
       nets: [],
       issues: parsed.error.issues,
     });
-    return { sheet: undefined, netList: undefined, error: err, unknowns: 0, linearSolverName: '', solve: () => err };
+    return failedCircuit(undefined, undefined, err);
   }
   const sheet = parsed.sheet;
   const base = buildBase(sheet);
@@ -301,100 +404,142 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
   if (base.nets.groundIndex < 0) {
     const info = checkTopology({ netNames: [], netPins: [], groundIndex: -1, active: [], parts: [] })!;
     const err = failure(info, base.staticWarnings);
-    return { sheet, netList: base.nets, error: err, unknowns: 0, linearSolverName: '', solve: () => err };
+    return failedCircuit(sheet, base.nets, err);
   }
   const baseInst = instantiate(base, (p) => p.params as Record<string, unknown>, baseCond, opts, null);
   let lastSystem: { system: LinearSystem; signature: string } | null = baseInst.ok ? { system: baseInst.inst.circuit.system, signature: baseInst.inst.signature } : null;
-  let lastX: Float64Array | null = null;
-  let lastSignature = '';
+
+  const internalError = (e: unknown) =>
+    failure({ code: 'internal_error', message: `The solver hit an internal error: ${e instanceof Error ? e.message : String(e)}. Please report this sheet.`, parts: [], nets: [] }, base.staticWarnings);
+  const byId = new Map(sheet.parts.map((p) => [p.id, p] as const));
+  let last: { inst: Instance; x: Float64Array; gmin: number; iterations: number; strategy: SolveStrategy; cond: { temperatureC: number; illuminanceLux: number } } | null = null;
+
+  /** Validate options, build (or patch) the instance for this solve. */
+  const prepare = (so: CircuitSolveOptions): { inst: Instance; cond: { temperatureC: number; illuminanceLux: number } } | SolveFailure => {
+    const cond = { ...baseCond, ...stripUndefined(so.conditions ?? {}) };
+    for (const [k, v] of [['temperatureC', cond.temperatureC], ['illuminanceLux', cond.illuminanceLux]] as const) {
+      const bad = k === 'temperatureC' ? !(Number.isFinite(v) && v > -273.15) : !(Number.isFinite(v) && v >= 0);
+      if (bad)
+        return failure({ code: 'invalid_parameter', message: `conditions.${k} must be ${k === 'temperatureC' ? 'a temperature above −273.15 °C' : 'zero or more lux'} (got ${v}).`, parts: [], nets: [] }, base.staticWarnings);
+    }
+    const overrides = so.paramOverrides;
+    const hasOverrides = overrides !== undefined && Object.keys(overrides).length > 0;
+    const condChanged = cond.temperatureC !== baseCond.temperatureC || cond.illuminanceLux !== baseCond.illuminanceLux;
+    if (!hasOverrides && !condChanged) {
+      if (!baseInst.ok) return failure(baseInst.error, base.staticWarnings);
+      return { inst: baseInst.inst, cond };
+    }
+    const merged = new Map<string, Record<string, unknown>>();
+    if (hasOverrides) {
+      const issues: SheetIssue[] = [];
+      for (const [id, ov] of Object.entries(overrides!)) {
+        const part = byId.get(id);
+        if (!part) {
+          issues.push({ path: `paramOverrides.${id}`, partId: id, message: `paramOverrides: there is no part "${id}" on the sheet.` });
+          continue;
+        }
+        const def = partCatalog[part.type];
+        const params = { ...(part.params as Record<string, unknown>), ...ov };
+        for (const key of Object.keys(ov)) {
+          const info = def.params.find((p) => p.name === key);
+          if (!info) {
+            issues.push({ path: `paramOverrides.${id}.${key}`, partId: id, field: key, message: `Part "${id}" (${part.type}): there is no param "${key}" to override.` });
+            continue;
+          }
+          const prob = paramProblem(info, params[key]);
+          if (prob) issues.push({ path: `paramOverrides.${id}.${key}`, partId: id, field: key, message: `Part "${id}" (${part.type}): field "${key}" ${prob}.` });
+        }
+        for (const [field, msg] of def.crossCheck?.(params) ?? [])
+          issues.push({ path: `paramOverrides.${id}.${field}`, partId: id, field, message: `Part "${id}" (${part.type}): field "${field}" ${msg}.` });
+        merged.set(id, params);
+      }
+      if (issues.length)
+        return failure(
+          { code: 'invalid_parameter', message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message, parts: [...new Set(issues.map((i) => i.partId!).filter(Boolean))], nets: [], issues },
+          base.staticWarnings,
+        );
+    }
+    const paramsOf = (p: Part) => merged.get(p.id) ?? (p.params as Record<string, unknown>);
+    if (baseInst.ok) {
+      const changed = condChanged ? base.solved : [...merged.keys()].map((id) => byId.get(id)!);
+      const patched = patchInstance(base, baseInst.inst, changed, paramsOf, cond, opts);
+      if (patched && !patched.ok) return failure(patched.error, base.staticWarnings);
+      if (patched) return { inst: patched.inst, cond };
+    }
+    const r = instantiate(base, paramsOf, cond, opts, lastSystem);
+    if (!r.ok) return failure(r.error, base.staticWarnings);
+    lastSystem = { system: r.inst.circuit.system, signature: r.inst.signature };
+    return { inst: r.inst, cond };
+  };
+
+  const initialVector = (inst: Instance, g: CircuitSolveOptions['initialGuess']): Float64Array => {
+    const n = inst.circuit.size;
+    let x0 = new Float64Array(n);
+    if (g === 'previous') {
+      if (last && last.inst.signature === inst.signature) x0 = last.x.slice();
+    } else if (g && typeof g === 'object') {
+      const exact = results.get(g);
+      if (exact && exact.length === n && (g as SolveSuccess).ok === true && last?.inst.signature === inst.signature) x0 = exact.slice();
+      else {
+        const byName = (g as SolveSuccess).ok === true ? (g as SolveSuccess).nets : (g as Record<string, number>);
+        base.nets.nets.forEach((net, i) => {
+          const u = base.netUnknown[i];
+          const v = byName[net.name];
+          if (u >= 0 && typeof v === 'number' && Number.isFinite(v)) x0[u] = v;
+        });
+        // internal nodes: start at the voltage of the part's first pin
+        const external = base.externalCount;
+        for (const d of inst.devices)
+          for (const node of d.nodes) if (node >= external && inst.kinds[node] === UNKNOWN_NODE && d.nodes[0] < external) x0[node] = x0[d.nodes[0]];
+      }
+    }
+    return x0;
+  };
+
+  const solveRaw = (so: CircuitSolveOptions = {}): RawSolveResult => {
+    try {
+      const prep = prepare(so);
+      if ('ok' in prep) return prep;
+      const { inst, cond } = prep;
+      const outcome = runStrategies(inst.circuit, initialVector(inst, so.initialGuess), opts);
+      if (!outcome.ok) return failure(describeFailure(outcome, inst, base), base.staticWarnings);
+      for (let i = 0; i < outcome.x.length; i++)
+        if (!Number.isFinite(outcome.x[i])) return failure({ code: 'non_finite', message: 'The solve produced a value that is not a finite number. Check for extreme parameter values.', parts: [], nets: [] }, base.staticWarnings);
+      last = { inst, x: outcome.x, gmin: outcome.gminUsed, iterations: outcome.iterations, strategy: outcome.strategy, cond };
+      return { ok: true, iterations: outcome.iterations };
+    } catch (e) {
+      return internalError(e);
+    }
+  };
 
   const solve = (so: CircuitSolveOptions = {}): SolveResult => {
+    const raw = solveRaw(so);
+    if (!raw.ok) return raw;
     try {
-      const cond = { ...baseCond, ...stripUndefined(so.conditions ?? {}) };
-      for (const [k, v] of [['temperatureC', cond.temperatureC], ['illuminanceLux', cond.illuminanceLux]] as const) {
-        const bad = k === 'temperatureC' ? !(Number.isFinite(v) && v > -273.15) : !(Number.isFinite(v) && v >= 0);
-        if (bad)
-          return failure({ code: 'invalid_parameter', message: `conditions.${k} must be ${k === 'temperatureC' ? 'a temperature above −273.15 °C' : 'zero or more lux'} (got ${v}).`, parts: [], nets: [] }, base.staticWarnings);
-      }
-      let inst: Instance;
-      const overrides = so.paramOverrides;
-      const hasOverrides = overrides && Object.keys(overrides).length > 0;
-      const condChanged = cond.temperatureC !== baseCond.temperatureC || cond.illuminanceLux !== baseCond.illuminanceLux;
-      if (!hasOverrides && !condChanged) {
-        if (!baseInst.ok) return failure(baseInst.error, base.staticWarnings);
-        inst = baseInst.inst;
-      } else {
-        const merged = new Map<string, Record<string, unknown>>();
-        if (hasOverrides) {
-          const issues: SheetIssue[] = [];
-          for (const [id, ov] of Object.entries(overrides!)) {
-            const part = sheet.parts.find((p) => p.id === id);
-            if (!part) {
-              issues.push({ path: `paramOverrides.${id}`, partId: id, message: `paramOverrides: there is no part "${id}" on the sheet.` });
-              continue;
-            }
-            const def = partCatalog[part.type];
-            const params = { ...(part.params as Record<string, unknown>), ...ov };
-            for (const key of Object.keys(ov)) {
-              const info = def.params.find((p) => p.name === key);
-              if (!info) {
-                issues.push({ path: `paramOverrides.${id}.${key}`, partId: id, field: key, message: `Part "${id}" (${part.type}): there is no param "${key}" to override.` });
-                continue;
-              }
-              const prob = paramProblem(info, params[key]);
-              if (prob) issues.push({ path: `paramOverrides.${id}.${key}`, partId: id, field: key, message: `Part "${id}" (${part.type}): field "${key}" ${prob}.` });
-            }
-            for (const [field, msg] of def.crossCheck?.(params) ?? [])
-              issues.push({ path: `paramOverrides.${id}.${field}`, partId: id, field, message: `Part "${id}" (${part.type}): field "${field}" ${msg}.` });
-            merged.set(id, params);
-          }
-          if (issues.length)
-            return failure(
-              { code: 'invalid_parameter', message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message, parts: [...new Set(issues.map((i) => i.partId!).filter(Boolean))], nets: [], issues },
-              base.staticWarnings,
-            );
-        }
-        const r = instantiate(base, (p) => merged.get(p.id) ?? (p.params as Record<string, unknown>), cond, opts, lastSystem);
-        if (!r.ok) return failure(r.error, base.staticWarnings);
-        inst = r.inst;
-        lastSystem = { system: inst.circuit.system, signature: inst.signature };
-      }
-
-      // initial guess
-      const n = inst.circuit.size;
-      let x0 = new Float64Array(n);
-      const g = so.initialGuess;
-      if (g === 'previous') {
-        if (lastX && lastSignature === inst.signature) x0 = lastX.slice();
-      } else if (g && typeof g === 'object') {
-        const exact = results.get(g);
-        if (exact && exact.length === n && (g as SolveSuccess).ok === true && lastSignature === inst.signature) x0 = exact.slice();
-        else {
-          const byName = (g as SolveSuccess).ok === true ? (g as SolveSuccess).nets : (g as Record<string, number>);
-          base.nets.nets.forEach((net, i) => {
-            const u = base.netUnknown[i];
-            const v = byName[net.name];
-            if (u >= 0 && typeof v === 'number' && Number.isFinite(v)) x0[u] = v;
-          });
-          // internal nodes: start at the voltage of the part's first pin
-          const external = base.externalCount;
-          for (const d of inst.devices)
-            for (const node of d.nodes) if (node >= external && inst.kinds[node] === UNKNOWN_NODE && d.nodes[0] < external) x0[node] = x0[d.nodes[0]];
-        }
-      }
-
-      const outcome = runStrategies(inst.circuit, x0, opts);
-      if (!outcome.ok) return failure(describeFailure(outcome, inst, base), base.staticWarnings);
-      const res = assemble(base, inst, outcome.x, outcome.gminUsed, cond, outcome.iterations, outcome.strategy);
-      if (res.ok) {
-        lastX = outcome.x;
-        lastSignature = inst.signature;
-        results.set(res, outcome.x);
-      }
+      const l = last!;
+      const res = assemble(base, l.inst, l.x, l.gmin, l.cond, l.iterations, l.strategy);
+      if (res.ok) results.set(res, l.x);
       return res;
     } catch (e) {
-      return failure({ code: 'internal_error', message: `The solver hit an internal error: ${e instanceof Error ? e.message : String(e)}. Please report this sheet.`, parts: [], nets: [] }, base.staticWarnings);
+      return internalError(e);
     }
+  };
+
+  const needLast = () => {
+    if (!last) throw new Error('no solution yet: call solveRaw() or solve() first, and check that it succeeded');
+    return last;
+  };
+  const pinVoltageOf = (l: NonNullable<typeof last>, partId: string, pin: string) => {
+    const idx = base.nets.pinToIndex.get(pinKey(partId, pin));
+    if (idx === undefined) throw new Error(`no pin ${partId}.${pin}`);
+    const u = base.netUnknown[idx];
+    return u < 0 ? 0 : l.x[u];
+  };
+  const partCurrents = (l: NonNullable<typeof last>, partId: string): number[] => {
+    const part = byId.get(partId);
+    if (!part) throw new Error(`no part ${partId}`);
+    const dev = l.inst.deviceById.get(partId);
+    return dev ? dev.pinCurrents(l.x, l.gmin) : partCatalog[part.type].pins.map(() => 0);
   };
 
   return {
@@ -403,7 +548,35 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     error: null,
     unknowns: baseInst.ok ? baseInst.inst.circuit.size : 0,
     linearSolverName: baseInst.ok ? baseInst.inst.circuit.system.solverName : '',
+    netNames: base.nets.nets.filter((_, i) => base.active[i]).map((n) => n.name),
     solve,
+    solveRaw,
+    netVoltage(net) {
+      const l = needLast();
+      const n = base.nets.byName.get(net);
+      if (!n) throw new Error(`no net "${net}"`);
+      const u = base.netUnknown[n.index];
+      return u < 0 ? 0 : l.x[u];
+    },
+    pinVoltage(partId, pin) {
+      return pinVoltageOf(needLast(), partId, pin);
+    },
+    pinCurrent(partId, pin) {
+      const l = needLast();
+      const part = byId.get(partId);
+      if (!part) throw new Error(`no part ${partId}`);
+      const k = partCatalog[part.type].pins.findIndex((p) => p.name === pin);
+      if (k < 0) throw new Error(`no pin ${partId}.${pin}`);
+      return partCurrents(l, partId)[k];
+    },
+    partPower(partId) {
+      const l = needLast();
+      const part = byId.get(partId)!;
+      const cur = partCurrents(l, partId);
+      let p = 0;
+      partCatalog[part.type].pins.forEach((pin, k) => (p += pinVoltageOf(l, partId, pin.name) * cur[k]));
+      return p;
+    },
   };
 }
 

@@ -1,6 +1,6 @@
 // The circuit engine: DC operating point by modified nodal analysis.
 export { compileCircuit, solveOperatingPoint } from './compile';
-export type { CompiledCircuit, CircuitSolveOptions, ParamOverrides, SolveOptions } from './compile';
+export type { CompiledCircuit, CircuitSolveOptions, ParamOverrides, RawSolveResult, SolveOptions } from './compile';
 export * from './result';
 export * from './constants';
 export type { Device, DeviceModel, DeviceEnv, TopologyEdge, Stamper } from './device';

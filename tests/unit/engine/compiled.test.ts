@@ -91,4 +91,41 @@ describe('compileCircuit', () => {
     expect(c.error?.error.code).toBe('no_ground');
     expect(c.solve().ok).toBe(false);
   });
+
+  it('solveRaw and the accessors give the same numbers as solve()', () => {
+    const c = compileCircuit(biasSheet);
+    expect(c.netNames).toEqual(['N1', '0', 'N2', 'N3', 'N4', 'N5']);
+    const full = c.solve({ paramOverrides: { RE: { resistance: 560 } } });
+    const raw = c.solveRaw({ paramOverrides: { RE: { resistance: 560 } } });
+    if (!full.ok || !raw.ok) throw new Error('solve');
+    expect(raw.iterations).toBe(full.iterations);
+    for (const n of c.netNames) expect(c.netVoltage(n)).toBe(full.nets[n]);
+    expect(c.pinVoltage('Q1', 'c')).toBe(full.pins['Q1.c']);
+    expect(c.pinCurrent('Q1', 'b')).toBe(full.parts.Q1.pinCurrents.b);
+    expect(c.partPower('RC')).toBeCloseTo(full.parts.RC.power, 15);
+    expect(() => c.netVoltage('nope')).toThrow();
+    const failed = compileCircuit(sheet([part('R1', 'resistor', { resistance: 1 })], []));
+    expect(failed.solveRaw().ok).toBe(false);
+    expect(() => failed.netVoltage('0')).toThrow();
+  });
+
+  it('overrides that change the structure (a 0 Ω end position, a new series resistance) still solve', () => {
+    const s = sheet(
+      [part('V1', 'dc_voltage_source', { voltage: 5 }), part('RV1', 'potentiometer', { resistance: 10000, position: 0.5 }), part('R1', 'resistor', { resistance: 1000 }), part('D1', 'diode'), part('G', 'ground')],
+      [wire('V1.pos', 'RV1.a'), wire('RV1.b', 'G.g'), wire('RV1.w', 'R1.a'), wire('R1.b', 'D1.anode'), wire('D1.cathode', 'G.g'), wire('V1.neg', 'G.g')],
+    );
+    const c = compileCircuit(s);
+    for (const ov of [{ RV1: { position: 0 } }, { RV1: { position: 1 } }, { D1: { seriesResistance: 50 } }, { RV1: { position: 0.25 }, D1: { seriesResistance: 0 } }]) {
+      const a = c.solve({ paramOverrides: ov, initialGuess: 'previous' });
+      const edited = JSON.parse(JSON.stringify(s));
+      for (const [id, o] of Object.entries(ov)) Object.assign(edited.parts.find((p: { id: string }) => p.id === id).params, o);
+      const b = solveOperatingPoint(edited);
+      if (!a.ok || !b.ok) throw new Error('solve');
+      for (const k of Object.keys(b.nets)) expectRel(a.nets[k], b.nets[k], 1e-9, 1e-12);
+    }
+    const r = c.solve({ paramOverrides: { RV1: { position: 0 } } });
+    if (!r.ok) throw new Error('solve');
+    expect(r.pins['RV1.w']).toBe(5);
+  });
 });
+
