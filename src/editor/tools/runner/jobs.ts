@@ -2,7 +2,7 @@
 // progress callback, and resolves with the result or rejects with JobFailed / JobCancelled.
 import type { Sheet } from '../../../../shared/sheet';
 import type { SweepSpec, SweepTable } from '../../../../shared/analysis/sweep';
-import { chunkRanges, type MonteCarloChunk, type MonteCarloOptions, type MonteCarloResult } from '../../../../shared/analysis/monte-carlo';
+import { planChunks, type MonteCarloChunk, type MonteCarloOptions, type MonteCarloResult } from '../../../../shared/analysis';
 import type { WorstCaseOptions, WorstCaseResult } from '../../../../shared/analysis/worst-case';
 import type { TheveninResult } from '../../../../shared/analysis/thevenin';
 import type { WorkerPool } from './workerPool';
@@ -22,17 +22,13 @@ export async function sweepJob(pool: Pool, sheet: Sheet, spec: SweepSpec, c: Job
   return unwrap(await pool.run((api) => api.sweep(sheet, spec, cb) as Promise<JobOutcome<SweepTable>>, c.signal));
 }
 
-/** Samples per chunk below which splitting costs more than it gains. */
-const MIN_CHUNK = 64;
-
 /**
  * A Monte Carlo run split over the pool. Each sample draws from its own random substream, so the
  * result does not depend on the split (shared/analysis/prng.ts).
  */
 export async function monteCarloJob(pool: Pool, sheet: Sheet, o: MonteCarloOptions, c: JobControl = {}): Promise<MonteCarloResult> {
   // a few chunks per worker keep every worker busy and the progress bar moving
-  const parts = Math.max(1, Math.min(pool.size * 3, Math.floor(o.samples / MIN_CHUNK)));
-  const ranges = chunkRanges(o.samples, parts);
+  const ranges = planChunks(o.samples, pool.size, Math.max(100, Math.ceil(o.samples / (pool.size * 3))));
   const done = new Array<number>(ranges.length).fill(0);
   const report = () => c.onProgress?.(done.reduce((a, b) => a + b, 0), o.samples);
   const local = new AbortController();
