@@ -30,16 +30,37 @@ export function saveErrorMessage(e: unknown): string {
 
 /** A cloud project as a sheet source: viewers get it read-only; editors and owners save to it. */
 export function createCloudSheetSource(projectId: string, qc: QueryClient): SheetSource {
+  // A viewer's copy has no save at all, so the editor shows it as a read-only source.
+  let readOnly = false;
+  const save = async (sheet: LoadedSheet['sheet'], meta: SaveMeta): Promise<SaveResult> => {
+    const observer = new MutationObserver<ProjectDetail, unknown, { baseVersion: number }>(qc, {
+      mutationKey: ['projects', 'save', projectId],
+      mutationFn: ({ baseVersion }) => endpoints.patchProject(projectId, { sheet, baseVersion }),
+      onSuccess: (p) => storeProject(qc, p),
+    });
+    const cached = qc.getQueryData<ProjectDetail>(queryKeys.projects.detail(projectId));
+    const baseVersion = meta.baseVersion !== undefined ? Number(meta.baseVersion) : cached?.version;
+    if (baseVersion === undefined || !Number.isInteger(baseVersion)) throw new Error('Not saved: the sheet was not loaded from the server. Reload the page.');
+    try {
+      const p = await observer.mutate({ baseVersion });
+      return { version: p.version };
+    } catch (e) {
+      throw new Error(saveErrorMessage(e));
+    }
+  };
   return {
     key: `cloud-${projectId}`,
     autosaveDelayMs: 1200,
+    get save() {
+      return readOnly ? undefined : save;
+    },
     async load(signal) {
       const p = await qc.fetchQuery({
         queryKey: queryKeys.projects.detail(projectId),
         queryFn: ({ signal: s }) => endpoints.getProject(projectId, signal ?? s),
         staleTime: 0,
       });
-      const readOnly = p.role === 'viewer';
+      readOnly = p.role === 'viewer';
       return {
         sheet: readable(p.sheet, `Project “${p.title}”`),
         readOnly,
@@ -47,22 +68,6 @@ export function createCloudSheetSource(projectId: string, qc: QueryClient): Shee
         version: p.version,
         notice: readOnly ? 'Cloud project, view only: you can solve it; ask an owner for the editor role to change it.' : `Cloud project · your role: ${p.role} · saved to the server as you edit`,
       };
-    },
-    async save(sheet, meta: SaveMeta): Promise<SaveResult> {
-      const observer = new MutationObserver<ProjectDetail, unknown, { baseVersion: number }>(qc, {
-        mutationKey: ['projects', 'save', projectId],
-        mutationFn: ({ baseVersion }) => endpoints.patchProject(projectId, { sheet, baseVersion }),
-        onSuccess: (p) => storeProject(qc, p),
-      });
-      const cached = qc.getQueryData<ProjectDetail>(queryKeys.projects.detail(projectId));
-      const baseVersion = meta.baseVersion !== undefined ? Number(meta.baseVersion) : cached?.version;
-      if (baseVersion === undefined || !Number.isInteger(baseVersion)) throw new Error('Not saved: the sheet was not loaded from the server. Reload the page.');
-      try {
-        const p = await observer.mutate({ baseVersion });
-        return { version: p.version };
-      } catch (e) {
-        throw new Error(saveErrorMessage(e));
-      }
     },
   };
 }

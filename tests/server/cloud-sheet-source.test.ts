@@ -79,13 +79,26 @@ describe('cloud sheet source', () => {
     await expect(src.save!(edited, { title: 'x', baseVersion: 1, reason: 'explicit' })).rejects.toThrow(/someone else saved this project meanwhile \(it is now at version 2\)/);
   });
 
-  it('gives a viewer the sheet read-only and explains a refused save', async () => {
+  it('gives a viewer the sheet read-only, with no save at all', async () => {
     const { id } = await projectWithViewer();
     await browserAs('chen-demo');
     const src = createCloudSheetSource(id, new QueryClient());
+    expect(src.save).toBeDefined(); // not known before loading
     const loaded = await src.load();
     expect(loaded.readOnly).toBe(true);
     expect(loaded.notice).toMatch(/view only/);
+    expect(src.save).toBeUndefined();
+  });
+
+  it('explains a save refused because the role was lowered meanwhile', async () => {
+    const { ada, id } = await projectWithViewer();
+    const chen = (await ada.get(`/api/projects/${id}/members`)).body.members.find((m: { login: string }) => m.login === 'chen-demo');
+    await ada.patch(`/api/projects/${id}/members/${chen.userId}`).send({ role: 'editor' });
+    await browserAs('chen-demo');
+    const src = createCloudSheetSource(id, new QueryClient());
+    const loaded = await src.load();
+    expect(loaded.readOnly).toBe(false);
+    await ada.patch(`/api/projects/${id}/members/${chen.userId}`).send({ role: 'viewer' });
     await expect(src.save!(loaded.sheet, { title: 'x', baseVersion: 1, reason: 'autosave' })).rejects.toThrow(/can no longer edit this project/);
   });
 
