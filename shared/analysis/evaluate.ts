@@ -22,9 +22,14 @@ export class CircuitFailureError extends Error {
   }
 }
 
-/** Compile a sheet (object or parsed) for repeated solves. @throws CircuitFailureError for an invalid sheet */
+/**
+ * Compile a sheet (object or parsed) for repeated solves. Analyses default to the sparse LU even
+ * for small circuits: they solve one pattern hundreds of times, and a numeric refactorisation is
+ * cheaper than a fresh dense factorisation (bench/linalg.bench.ts).
+ * @throws CircuitFailureError for an invalid sheet
+ */
 export function prepareCircuit(sheet: Sheet | unknown, options: SolveOptions = {}): PreparedCircuit {
-  const compiled = compileCircuit(sheet, options);
+  const compiled = compileCircuit(sheet, { linearSolver: 'sparse', ...options });
   if (compiled.error || !compiled.sheet || !compiled.netList) throw new CircuitFailureError(compiled.error!);
   return { compiled, sheet: compiled.sheet, nets: compiled.netList };
 }

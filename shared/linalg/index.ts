@@ -8,3 +8,4 @@ export * from './lu-symbolic';
 export * from './sparse-pattern';
 export * from './sparse-solver';
 export * from './mna-system';
+export * from './defer-zero-diagonals';

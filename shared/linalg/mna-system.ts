@@ -6,10 +6,15 @@ import { SingularMatrixError } from './lu-factor';
 import { SparsePatternBuilder } from './sparse-pattern';
 import { SparseLuSolver } from './sparse-solver';
 
+/** Systems up to 2048 unknowns index entries through a flat table (16 MiB at most). */
+const TABLE_LIMIT = 2048 * 2048;
+
 export class SparseMnaSystem implements LinearSystem {
   readonly solverName = 'sparse-lu (AMD, refactorising)';
   private readonly values: Float64Array;
   private readonly rhs: Float64Array;
+  /** (row·size + col) → value index: a flat table for small systems (fast), a Map for large ones */
+  private readonly table: Int32Array | null;
   private readonly index = new Map<number, number>();
   private readonly solver: SparseLuSolver;
 
@@ -18,8 +23,10 @@ export class SparseMnaSystem implements LinearSystem {
     const b = new SparsePatternBuilder(size);
     const slots = pattern.map(([r, c]) => b.slot(r, c));
     const built = b.build();
-    for (let k = 0; k < pattern.length; k++) this.index.set(pattern[k][0] * size + pattern[k][1], built.slotIndex[slots[k]]);
-    for (let i = 0; i < size; i++) this.index.set(i * size + i, built.slotIndex[b.slot(i, i)]);
+    this.table = size * size <= TABLE_LIMIT ? new Int32Array(size * size).fill(-1) : null;
+    const put = (key: number, at: number) => (this.table ? (this.table[key] = at) : this.index.set(key, at));
+    for (let k = 0; k < pattern.length; k++) put(pattern[k][0] * size + pattern[k][1], built.slotIndex[slots[k]]);
+    for (let i = 0; i < size; i++) put(i * size + i, built.slotIndex[b.slot(i, i)]);
     this.values = built.matrix.values;
     this.rhs = new Float64Array(size);
     this.solver = new SparseLuSolver(built.matrix);
@@ -31,8 +38,9 @@ export class SparseMnaSystem implements LinearSystem {
   }
 
   add(row: number, col: number, value: number): void {
-    const p = this.index.get(row * this.size + col);
-    if (p === undefined) throw new Error(`sparse system: entry (${row}, ${col}) is not in the recorded pattern`);
+    const key = row * this.size + col;
+    const p = this.table ? this.table[key] : this.index.get(key);
+    if (p === undefined || p < 0 || !(row >= 0 && col >= 0 && row < this.size && col < this.size)) throw new Error(`sparse system: entry (${row}, ${col}) is not in the recorded pattern`);
     this.values[p] += value;
   }
 

@@ -6,6 +6,7 @@ import type { CscMatrix } from './csc';
 import { luFactor, type LuFactors } from './lu-factor';
 import { luRefactor, luSolve, luSolveTransposed } from './lu-refactor';
 import { staticPivotSymbolic } from './lu-symbolic';
+import { deferZeroDiagonals } from './defer-zero-diagonals';
 
 export interface SparseSolverOptions {
   /** diagonal preference in a full factorisation (0 < tol ≤ 1); default 0.1 */
@@ -37,7 +38,8 @@ export interface SparseSolverStats {
  * `factor()`, then `solve(b)` as often as needed.
  */
 export class SparseLuSolver {
-  readonly colPerm: Int32Array;
+  private order: Int32Array;
+  private deferralTried = false;
   private factors: LuFactors | null = null;
   private readonly work: Float64Array;
   private readonly pivotTolerance: number;
@@ -53,7 +55,7 @@ export class SparseLuSolver {
     this.pivotTolerance = options.pivotTolerance ?? 0.1;
     this.refactorTolerance = options.refactorTolerance ?? 1e-3;
     this.staticPivotFirst = options.staticPivotFirst ?? true;
-    this.colPerm = options.ordering === 'natural' ? Int32Array.from({ length: pattern.cols }, (_, i) => i) : approximateMinimumDegree(pattern);
+    this.order = options.ordering === 'natural' ? Int32Array.from({ length: pattern.cols }, (_, i) => i) : approximateMinimumDegree(pattern);
     this.work = new Float64Array(pattern.cols);
   }
 
@@ -66,15 +68,31 @@ export class SparseLuSolver {
     this.factors = null;
     this.full++;
     if (this.staticPivotFirst) {
-      const f = staticPivotSymbolic(this.pattern, this.colPerm);
-      if (luRefactor(f, this.pattern, this.refactorTolerance, this.work)) {
-        this.factors = f;
-        this.staticPivots = true;
-        return;
+      if (this.tryStatic(this.order)) return;
+      if (!this.deferralTried) {
+        this.deferralTried = true;
+        const alt = deferZeroDiagonals(this.pattern, this.order);
+        if (alt && this.tryStatic(alt)) {
+          this.order = alt;
+          return;
+        }
       }
     }
-    this.factors = luFactor(this.pattern, this.colPerm, this.pivotTolerance);
+    this.factors = luFactor(this.pattern, this.order, this.pivotTolerance);
     this.staticPivots = false;
+  }
+
+  /** the column (elimination) order in use: original index eliminated k-th */
+  get colPerm(): Int32Array {
+    return this.order;
+  }
+
+  private tryStatic(order: Int32Array): boolean {
+    const f = staticPivotSymbolic(this.pattern, order);
+    if (!luRefactor(f, this.pattern, this.refactorTolerance, this.work)) return false;
+    this.factors = f;
+    this.staticPivots = true;
+    return true;
   }
 
   /** Force the next factor() to search pivots afresh (e.g. after a change of operating region). */

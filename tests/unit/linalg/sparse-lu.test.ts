@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { LuDecomposition, Matrix } from 'ml-matrix';
 import { lusolve, slu, sparse } from 'mathjs';
 import { cscMultiply, SingularMatrixError, SparseLuSolver, cscFromTriplets } from '../../../shared/linalg';
-import { randomSparse } from './random-matrices';
+import { gridLaplacian, randomSparse } from './random-matrices';
 
 function maxAbsDiff(a: ArrayLike<number>, b: ArrayLike<number>): number {
   let m = 0;
@@ -73,6 +73,34 @@ describe('sparse LU solves like ml-matrix (dense LU) and mathjs (slu/lusolve)', 
     expect(solver.stats().fullFactorizations).toBe(2);
     // [[0,1],[1,0]] x = [3, 4] → x = [4, 3]
     expect(Array.from(solver.solve([3, 4]))).toEqual([4, 3]);
+  });
+
+  it('keeps cheap diagonal pivots for an MNA matrix with a voltage-source row (zero diagonal)', () => {
+    // 12×12 resistor grid plus one branch unknown: v(node 0) = 1 V (rows/cols [G B; Bᵀ 0])
+    const g = gridLaplacian(12);
+    const n = g.cols + 1;
+    const ti: number[] = [];
+    const tj: number[] = [];
+    const tv: number[] = [];
+    for (let j = 0; j < g.cols; j++)
+      for (let p = g.colPtr[j]; p < g.colPtr[j + 1]; p++) {
+        ti.push(g.rowIdx[p]);
+        tj.push(j);
+        tv.push(g.values[p]);
+      }
+    ti.push(n - 1, 0, n - 1);
+    tj.push(0, n - 1, n - 1);
+    tv.push(1, 1, 0);
+    const a = cscFromTriplets(n, n, ti, tj, tv);
+    const b = new Float64Array(n);
+    b[n - 1] = 1;
+    const solver = new SparseLuSolver(a);
+    solver.factor();
+    expect(solver.stats().staticPivots).toBe(true);
+    const dense = Array.from({ length: n }, () => new Array<number>(n).fill(0));
+    for (let k = 0; k < ti.length; k++) dense[ti[k]][tj[k]] += tv[k];
+    const ref = new LuDecomposition(new Matrix(dense)).solve(Matrix.columnVector(Array.from(b))).to1DArray();
+    expect(maxAbsDiff(solver.solve(b), ref)).toBeLessThan(1e-12);
   });
 
   it('names the column of a structurally singular matrix', () => {
