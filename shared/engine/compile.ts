@@ -403,6 +403,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
   const baseCond = { temperatureC: sheet.conditions.temperatureC, illuminanceLux: sheet.conditions.illuminanceLux };
   if (base.nets.groundIndex < 0) {
     const info = checkTopology({ netNames: [], netPins: [], groundIndex: -1, active: [], parts: [] })!;
+    if (sheet.parts.every((p) => p.type === 'net_label')) info.message = 'The sheet has no parts yet. Add a supply, the parts to solve and a ground.';
     const err = failure(info, base.staticWarnings);
     return failedCircuit(sheet, base.nets, err);
   }

@@ -131,9 +131,10 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
           nets,
         };
       }
+      const what = sources.length === 0 ? 'ideal 0 Ω links' : sources.length === loopParts.length ? 'ideal voltage sources' : 'ideal voltage sources and 0 Ω links';
       return {
         code: 'voltage_source_loop',
-        message: `${listParts(described)} ${loopParts.length === 2 ? 'are in parallel' : 'form a loop'} of ideal ${sources.length ? 'voltage sources' : '0 Ω links'}${sources.length && sources.length < loopParts.length ? ' and 0 Ω links' : ''}: the voltages agree, but how the current divides between them is undetermined. Give one of them an internal (or on-) resistance, or remove one.`,
+        message: `${listParts(described)} ${loopParts.length === 2 ? `are ${what} in parallel` : `form a loop of ${what}`}: the voltages agree, but how the current divides between them is undetermined. Give one of them ${sources.length ? 'an internal resistance' : 'a non-zero on-resistance'}, or remove one.`,
         parts: loopParts,
         nets,
       };

@@ -66,6 +66,29 @@ describe('structural diagnostics', () => {
     expect(ok.nets.N1).toBe(5);
   });
 
+  it('ideal 0 Ω links in parallel; a 0 Ω section with both ends on one net is harmless', () => {
+    const s = sheet(
+      [V('V1', 5), part('S1', 'switch', { onResistance: 0 }), part('S2', 'switch', { onResistance: 0 }), R('R1', 100), part('G', 'ground')],
+      [wire('V1.pos', 'S1.a'), wire('V1.pos', 'S2.a'), wire('S1.b', 'R1.a'), wire('S2.b', 'R1.a'), wire('R1.b', 'G.g'), wire('V1.neg', 'G.g')],
+    );
+    const e = fail(s);
+    expect(e.code).toBe('voltage_source_loop');
+    expect(e.message).toMatch(/are ideal 0 Ω links in parallel/);
+    expect(e.message).toMatch(/non-zero on-resistance/);
+    // a potentiometer wired as a rheostat (a tied to w) at position 0
+    const rheostat = sheet(
+      [V('V1', 5), part('RV1', 'potentiometer', { resistance: 1000, position: 0 }), R('R1', 100), part('G', 'ground')],
+      [wire('V1.pos', 'RV1.a'), wire('RV1.a', 'RV1.w'), wire('RV1.b', 'R1.a'), wire('R1.b', 'G.g'), wire('V1.neg', 'G.g')],
+    );
+    expect(solveOk(rheostat).pins['R1.a']).toBeCloseTo((5 * 100) / 1100, 12);
+  });
+
+  it('an empty sheet says so', () => {
+    const e = fail(sheet([], []));
+    expect(e.code).toBe('no_ground');
+    expect(e.message).toMatch(/no parts yet/);
+  });
+
   it('a source shorted by a wire', () => {
     const e = fail(sheet([V('V1', 5), part('G', 'ground')], [wire('V1.pos', 'V1.neg'), wire('V1.neg', 'G.g')]));
     expect(e.code).toBe('voltage_source_loop');
