@@ -1,11 +1,11 @@
 // The one place the analyses call the engine: compile a sheet once, then solve points warm-started
-// from the previous converged point and read the chosen outputs. When the engine grows a lean
-// solve (docs/requests/analysis-needs.md §3) only this file changes.
+// from the previous converged point and read the chosen outputs through the engine's lean path
+// (solveRaw + accessors: no result object is built per point).
 import { compileCircuit, type CircuitSolveOptions, type CompiledCircuit, type SolveOptions } from '../engine/compile';
-import type { SolveFailure, SolveResult, SolveSuccess } from '../engine/result';
+import { failure, type SolveFailure, type SolveResult, type SolveSuccess } from '../engine/result';
 import type { NetList } from '../sheet/nets';
 import type { Sheet } from '../sheet/schema';
-import { checkOutputs, readOutput, type OutputSpec } from './outputs';
+import { checkOutputs, outputKey, type OutputSpec } from './outputs';
 import { AnalysisInputError } from './targets';
 
 export interface PreparedCircuit {
@@ -45,14 +45,27 @@ export function solvePoint(p: PreparedCircuit, opts: CircuitSolveOptions, warm =
   return p.compiled.solve(warm ? { ...opts, initialGuess: 'previous' } : opts);
 }
 
-/** Solve and read outputs into `out`; returns null on success or the failure. */
+/** Read an output from the circuit's last successful solve (solve or solveRaw). */
+export function readLast(p: PreparedCircuit, o: OutputSpec): number {
+  const c = p.compiled;
+  return o.kind === 'net' ? c.netVoltage(o.net) : o.kind === 'current' ? c.pinCurrent(o.part, o.pin) : c.partPower(o.part);
+}
+
+/** Solve and read outputs into `out`; returns null on success or the failure (out is NaN then). */
 export function evaluateOutputs(p: PreparedCircuit, opts: CircuitSolveOptions, outputs: readonly OutputSpec[], out: Float64Array, warm = true): SolveFailure | null {
-  const r = solvePoint(p, opts, warm);
+  const r = p.compiled.solveRaw(warm ? { ...opts, initialGuess: 'previous' } : opts);
   if (!r.ok) {
     out.fill(NaN);
     return r;
   }
-  for (let k = 0; k < outputs.length; k++) out[k] = readOutput(r, outputs[k]);
+  for (let k = 0; k < outputs.length; k++) {
+    const v = readLast(p, outputs[k]);
+    if (!Number.isFinite(v)) {
+      out.fill(NaN);
+      return failure({ code: 'non_finite', message: `The solve gave a value that is not a finite number for ${outputKey(outputs[k])}. Check for extreme parameter values.`, parts: [], nets: [] });
+    }
+    out[k] = v;
+  }
   return null;
 }
 

@@ -5,7 +5,7 @@
 import type { CircuitSolveOptions } from '../engine/compile';
 import type { SolveSuccess } from '../engine/result';
 import { controller, type RunControl } from './control';
-import { prepareCircuit, solveOrThrow, solvePoint, type PreparedCircuit } from './evaluate';
+import { prepareCircuit, solveOrThrow, type PreparedCircuit } from './evaluate';
 import { stepValues, type StepSpec } from './steps';
 import { AnalysisInputError, resolveTarget, solveOptionsFor, type ParamTarget } from './targets';
 
@@ -46,26 +46,35 @@ export interface SweepTable {
   stopped: boolean;
 }
 
-type Reader = (r: SolveSuccess) => number;
+type Reader = () => number;
 
-function columnsFrom(r: SolveSuccess, points: number): { names: string[]; units: string[]; readers: Reader[]; data: Float64Array[] } {
+/** One column per net voltage, pin current and part power of the nominal result, read from the engine's last solve. */
+function columnsFrom(p: PreparedCircuit, r: SolveSuccess, points: number): { names: string[]; units: string[]; readers: Reader[]; data: Float64Array[] } {
   const names: string[] = [];
   const units: string[] = [];
   const readers: Reader[] = [];
+  const c = p.compiled;
+  const guard = (f: () => number): Reader => () => {
+    try {
+      return f();
+    } catch {
+      return NaN;
+    }
+  };
   for (const net of Object.keys(r.nets)) {
     names.push(`V(${net})`);
     units.push('V');
-    readers.push((s) => s.nets[net] ?? NaN);
+    readers.push(guard(() => c.netVoltage(net)));
   }
   for (const [id, pr] of Object.entries(r.parts)) {
     for (const pin of Object.keys(pr.pinCurrents)) {
       names.push(`I(${id}.${pin})`);
       units.push('A');
-      readers.push((s) => s.parts[id]?.pinCurrents[pin] ?? NaN);
+      readers.push(guard(() => c.pinCurrent(id, pin)));
     }
     names.push(`P(${id})`);
     units.push('W');
-    readers.push((s) => s.parts[id]?.power ?? NaN);
+    readers.push(guard(() => c.partPower(id)));
   }
   return { names, units, readers, data: names.map(() => new Float64Array(points).fill(NaN)) };
 }
@@ -89,7 +98,7 @@ export function runSweep(circuit: PreparedCircuit | unknown, spec: SweepSpec, co
 
   // a nominal solve fixes the columns (and is the first warm start)
   const nominal = solveOrThrow(p, spec.base ?? {}, false);
-  const cols = columnsFrom(nominal, points);
+  const cols = columnsFrom(p, nominal, points);
   const axisColumns = axisValues.map(() => new Float64Array(points));
   const ok = new Uint8Array(points);
   const iterations = new Int32Array(points);
@@ -105,11 +114,11 @@ export function runSweep(circuit: PreparedCircuit | unknown, spec: SweepSpec, co
       vals[0] = outer[i];
       if (nInner > 1 || axisValues.length === 2) vals[1] = inner[j];
       for (let a = 0; a < targets.length; a++) axisColumns[a][point] = vals[a];
-      const r = solvePoint(p, solveOptionsFor(targets, vals, spec.base));
+      const r = p.compiled.solveRaw({ ...solveOptionsFor(targets, vals, spec.base), initialGuess: 'previous' });
       if (r.ok) {
         ok[point] = 1;
         iterations[point] = r.iterations;
-        for (let c = 0; c < cols.readers.length; c++) cols.data[c][point] = cols.readers[c](r);
+        for (let c = 0; c < cols.readers.length; c++) cols.data[c][point] = cols.readers[c]();
       } else errors.push({ point, at: Array.from(vals), code: r.error.code, message: r.error.message });
       done++;
       if (ctl.tick(done)) {
