@@ -1,12 +1,16 @@
-import { useParams } from 'react-router-dom';
+import { useLocation, useParams } from 'react-router-dom';
+import { SheetEditor } from '../editor/SheetEditor';
+import { registerBuiltinSources } from '../editor/sources/builtinSources';
 
-// Placeholder until the schematic editor lands.
+registerBuiltinSources();
+
+/**
+ * /sheets/:id — the schematic editor. When the editor itself moves the sheet to another route
+ * (an example saved as the local sheet) it passes `continuedFrom`, and the editor stays mounted.
+ */
 export function SheetPage() {
-  const { id } = useParams();
-  return (
-    <div className="p-6">
-      <h1 className="text-xl font-semibold">Sheet <span className="num">{id}</span></h1>
-      <p className="mt-2 text-ink-muted">The schematic editor is being built.</p>
-    </div>
-  );
+  const { id = 'local' } = useParams();
+  const location = useLocation();
+  const key = (location.state as { continuedFrom?: string } | null)?.continuedFrom ?? id;
+  return <SheetEditor key={key} routeId={id} />;
 }

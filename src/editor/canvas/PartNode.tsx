@@ -4,7 +4,7 @@ import { memo } from 'react';
 import { Handle, type NodeProps } from '@xyflow/react';
 import { useEditorState, useSolveState } from '../EditorContext';
 import { PartSymbol } from '../symbols/PartSymbol';
-import { rotatedPin, rotatedSize, SYMBOL_GEOMETRY } from '../symbols/geometry';
+import { rotatedPin, rotatedSize, SYMBOL_GEOMETRY, type Side } from '../symbols/geometry';
 import { SIDE_TO_HANDLE, type PartFlowNode } from './flowAdapter';
 import { currentText, powerText, valueText } from './partLabels';
 import { severityRank } from '../solve/solveView';
@@ -14,6 +14,9 @@ import { PotSlider } from './PotSlider';
 import type { Part } from '../../../shared/sheet';
 
 type LabelSide = 'above' | 'below' | 'left' | 'right';
+
+const OPPOSITE: Record<Side, Side> = { left: 'right', right: 'left', top: 'bottom', bottom: 'top' };
+const opposite = (s: Side) => OPPOSITE[s];
 
 function labelSide(part: Part): LabelSide {
   const r = part.rotation ?? 0;
@@ -75,19 +78,24 @@ function PartNodeView({ data, selected, width, height }: NodeProps<PartFlowNode>
             {count >= 2 && (
               <div className="pointer-events-none absolute h-[7px] w-[7px] -translate-x-1/2 -translate-y-1/2 rounded-full bg-wire" style={{ left: x, top: y }} />
             )}
-            {tags[ref] && <NetTagBadge tag={tags[ref]} side={p.side} x={x} y={y} />}
+            {tags[ref] && (part.type === 'net_label' ? (
+              // on a net label the flag names the net: put the voltage past the flag's far end
+              <NetTagBadge tag={tags[ref]} side={opposite(p.side)} x={w / 2 - p.x * 0.9} y={h / 2 - p.y * 0.9} hideName />
+            ) : (
+              <NetTagBadge tag={tags[ref]} side={p.side} x={x} y={y} />
+            ))}
           </div>
         );
       })}
       {hasLabel && (
-        <div className={`pointer-events-none absolute flex flex-col whitespace-nowrap leading-tight ${LABEL_STYLE[side]}`}>
+        <div className={`tl-label pointer-events-none absolute flex flex-col whitespace-nowrap leading-tight ${LABEL_STYLE[side]}`}>
           <span className="num text-[11px] font-semibold text-ink">
             {part.id}
             {corner && <span className="ml-1 rounded-sm bg-sunken px-1 text-[9px] font-semibold uppercase text-caution">{corner}</span>}
           </span>
           <span className="num text-[11px] text-ink-muted">{valueText(part)}</span>
           {(current || power) && (
-            <span className="num text-[10px] text-ok" data-testid={`part-reading-${part.id}`}>
+            <span className="num text-[10px] text-ink/80" data-testid={`part-reading-${part.id}`}>
               {[current, power].filter(Boolean).join(' · ')}
             </span>
           )}

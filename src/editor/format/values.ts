@@ -70,8 +70,10 @@ export function formatWatts(w: number): string {
   return formatEng(Math.abs(w) < 1e-15 ? 0 : w, 'W', { digits: 3 });
 }
 
-/** A param value with its unit, for labels on the canvas: "4.7 kΩ", "5 %". */
+/** A param value with its unit, for labels on the canvas: "4.7 kΩ" (prefix joined to the unit), "5 %". */
 export function formatParamWithUnit(info: ParamInfo, value: unknown): string {
+  if (typeof value === 'number' && Number.isFinite(value) && !isPercentParam(info) && KNOWN_UNITS.has(info.unit))
+    return formatEng(value, info.unit as Unit, { digits: 4 });
   const text = formatParamValue(info, value);
   const unit = fieldUnit(info);
   return unit ? `${text} ${unit}` : text;

@@ -42,3 +42,14 @@ describe('param fields', () => {
     expect(formatVolts(-1e-15)).toBe('0 V');
   });
 });
+
+import { readingsCsv } from '../../../src/editor/panels/readingsRows';
+describe('readings export', () => {
+  it('writes SI values with the unit in the header, parsable by an independent CSV reader (papaparse)', async () => {
+    const csv = readingsCsv('nets', [{ net: 'tap', voltage: 3.2432432432, pins: 'R1.b R2.a' }]);
+    expect(csv.split('\n')[0]).toBe('net,voltage_V,pins');
+    const Papa = (await import('papaparse')).default;
+    const back = Papa.parse<Record<string, string>>(csv, { header: true });
+    expect(Number(back.data[0].voltage_V)).toBeCloseTo(3.2432432432, 10);
+  });
+});
