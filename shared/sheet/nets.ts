@@ -166,17 +166,20 @@ export function extractNets(sheet: Pick<Sheet, 'parts' | 'wires'>): NetList {
     net.name = name;
   }
 
-  const pinToNet: Record<string, string> = {};
   const pinToIndex = new Map<string, number>();
-  for (const net of nets)
-    for (const p of net.pins) {
-      pinToNet[p] = net.name;
-      pinToIndex.set(p, net.index);
-    }
+  for (const net of nets) for (const p of net.pins) pinToIndex.set(p, net.index);
   const byName = new Map(nets.map((n) => [n.name, n] as const));
+  // built on first use: a plain object with tens of thousands of keys is slow to build
+  let pinToNet: Record<string, string> | null = null;
   return {
     nets,
-    pinToNet,
+    get pinToNet() {
+      if (!pinToNet) {
+        pinToNet = {};
+        for (const net of nets) for (const p of net.pins) pinToNet[p] = net.name;
+      }
+      return pinToNet;
+    },
     pinToIndex,
     groundIndex: groundRoot === -1 ? -1 : rootToNet.get(groundRoot)!.index,
     byName,

@@ -166,6 +166,31 @@ describe('random resistor networks against mathjs lusolve', () => {
     });
   }
 
+  it('dense, band and sparse LU agree on a 12×12 resistor grid with a diode (independent of the linear solver)', () => {
+    const n = 12;
+    const parts: Array<Record<string, unknown>> = [part('V1', 'dc_voltage_source', { voltage: 5 }), part('D1', 'diode'), part('G', 'ground')];
+    const wires: W[] = [wire('V1.neg', 'G.g'), wire('V1.pos', 'D1.anode')];
+    const rand = rng(7);
+    const node = (i: number, j: number) => `g${i}_${j}`;
+    for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) parts.push(part(`L${i}_${j}`, 'net_label', { name: node(i, j) }));
+    let k = 0;
+    for (let i = 0; i < n; i++)
+      for (let j = 0; j < n; j++)
+        for (const [di, dj] of [[0, 1], [1, 0]]) {
+          if (i + di >= n || j + dj >= n) continue;
+          const id = `R${++k}`;
+          parts.push(part(id, 'resistor', { resistance: 100 + 1000 * rand() }));
+          wires.push(wire(`${id}.a`, `L${i}_${j}.n`), wire(`${id}.b`, `L${i + di}_${j + dj}.n`));
+        }
+    wires.push(wire('D1.cathode', `L0_0.n`), wire(`L${n - 1}_${n - 1}.n`, 'G.g'));
+    const s = sheet(parts, wires);
+    const dense = solveOk(s, { linearSolver: 'dense' });
+    for (const kind of ['band', 'sparse', 'auto'] as const) {
+      const other = solveOk(s, { linearSolver: kind });
+      for (const key of Object.keys(dense.nets)) expectRel(other.nets[key], dense.nets[key], 1e-9, 1e-12);
+    }
+  });
+
   it('the band and the dense linear solvers agree on a larger network', () => {
     const { nodes, els } = network(12345);
     const s = toSheet(nodes, els);
