@@ -10,6 +10,9 @@ import { ProjectsPage } from './pages/ProjectsPage';
 import { ProjectSettingsPage } from './pages/ProjectSettingsPage';
 import { CloudSheetPage } from './pages/CloudSheetPage';
 import { InvitationPage } from './pages/InvitationPage';
+// Design tools: sweep, tolerance and budget tabs, the designer dialog and export (registers with the editor).
+import './editor/tools/register';
+import { ReportPage } from './pages/ReportPage';
 
 // Every client route, in one place.
 export const router = createBrowserRouter([
@@ -18,10 +21,12 @@ export const router = createBrowserRouter([
     children: [
       { path: '/', element: <HomePage /> },
       { path: '/sheets/:id', element: <SheetPage /> },
+      { path: '/sheets/:id/report', element: <ReportPage /> },
       { path: '/sign-in', element: <SignInPage /> },
       { path: '/projects', element: <ProjectsPage /> },
       { path: '/projects/:id', element: <CloudSheetPage /> },
       { path: '/projects/:id/settings', element: <ProjectSettingsPage /> },
+      { path: '/projects/:id/report', element: <ReportPage /> },
       { path: '/invitations/:token', element: <InvitationPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
