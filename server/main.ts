@@ -3,7 +3,8 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ConfigError, loadConfig, usesRealOAuth } from './config';
 import { openDatabase } from './db/client';
-import { createApp } from './app';
+import { createApp, sessionHandlersOf } from './app';
+import { attachRealtime } from './realtime/attach';
 import { startMail } from './mail/mailer';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -31,6 +32,7 @@ async function main(): Promise<void> {
   const mail = await startMail(config, database);
   const app = createApp({ config, database, mail, staticDir: config.TAPLINE_STATIC_DIR ?? path.join(root, 'dist') });
   const server = http.createServer(app);
+  const realtime = attachRealtime(server, { config, database, sessionHandlers: sessionHandlersOf(app) });
   server.on('error', (err: NodeJS.ErrnoException) => {
     if (err.code === 'EADDRINUSE') exitWith(`Port ${config.PORT} is already in use.`, 'Stop the program using it, or start with another port: PORT=5180 npm start');
     exitWith(`The server could not listen: ${err.message}`, 'Check HOST and PORT.');
@@ -43,9 +45,12 @@ async function main(): Promise<void> {
     if (!mail) console.log('tapline: no SMTP_HOST set, so invitations cannot be sent.');
   });
   const stop = () => {
-    server.close();
+    // socket.io first: it closes the HTTP server and releases its database connections before the pool ends.
+    const closing = realtime.close();
     server.closeAllConnections();
-    void Promise.resolve(mail?.close())
+    void closing
+      .catch(() => undefined)
+      .then(() => mail?.close())
       .catch(() => undefined)
       .then(() => database.close())
       .finally(() => process.exit(0));
