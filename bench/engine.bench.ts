@@ -109,7 +109,15 @@ export async function run(): Promise<void> {
       rows.push({ sheet: `grid ${n}×${n} (${n * n} nodes)`, solver: 'dense-lu (ml-matrix)', unknowns: n * n, compile: '', 'first solve': 'skipped: dense (10⁴×10⁴)', 're-solve': '', iterations: '' });
   }
   console.log('Operating-point solve time (median; see bench/engine.bench.ts for what each column covers)');
-  console.table(rows);
+  console.log(textTable(rows as unknown as Array<Record<string, string | number>>));
+}
+
+function textTable(rows: Array<Record<string, string | number>>): string {
+  const cols = Object.keys(rows[0] ?? {});
+  const cell = (r: Record<string, string | number>, c: string) => String(r[c] ?? '');
+  const width = cols.map((c) => Math.max(c.length, ...rows.map((r) => cell(r, c).length)));
+  const line = (vals: string[]) => vals.map((v, i) => (i === 0 ? v.padEnd(width[i]) : v.padStart(width[i]))).join('  ');
+  return [line(cols), width.map((w) => '-'.repeat(w)).join('  '), ...rows.map((r) => line(cols.map((c) => cell(r, c))))].join('\n');
 }
 
 if (import.meta.url === `file://${process.argv[1]}`) void run();

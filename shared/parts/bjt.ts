@@ -1,6 +1,7 @@
-import { defaultNumber, definePart, temperatureParam } from './types';
+import { defaultNumber, temperatureParam } from './types';
 
-function bjtParams() {
+/** Params shared by the NPN and PNP specs (npn.ts, pnp.ts). */
+export function bjtParams() {
   return {
     beta: defaultNumber(100, {
       label: 'Forward beta',
@@ -40,26 +41,8 @@ function bjtParams() {
   };
 }
 
-const bjtPins = [
+export const bjtPins = [
   { name: 'c', label: 'Collector' },
   { name: 'b', label: 'Base' },
   { name: 'e', label: 'Emitter' },
 ] as const;
-
-export const npnSpec = definePart({
-  type: 'npn',
-  label: 'NPN transistor',
-  description: 'An NPN bipolar transistor, Ebers–Moll transport model.',
-  designator: 'Q',
-  pins: bjtPins,
-  params: bjtParams(),
-});
-
-export const pnpSpec = definePart({
-  type: 'pnp',
-  label: 'PNP transistor',
-  description: 'A PNP bipolar transistor, Ebers–Moll transport model.',
-  designator: 'Q',
-  pins: bjtPins,
-  params: bjtParams(),
-});

@@ -4,7 +4,9 @@
 export * from './types';
 export { PART_TYPES, partSpecs, isPartType, type PartType } from './specs';
 import type { DeviceModel } from '../engine/device';
-import { npnModel, pnpModel } from './bjt.model';
+import { npnModel } from './npn.model';
+import { pnpModel } from './pnp.model';
+import { netLabelModel } from './net_label.model';
 import { dcCurrentSourceModel } from './dc_current_source.model';
 import { dcVoltageSourceModel } from './dc_voltage_source.model';
 import { diodeModel } from './diode.model';
@@ -41,7 +43,7 @@ const models: Record<PartType, DeviceModel<never>> = {
   load: loadModel,
   switch: switchModel,
   ground: connectorModel,
-  net_label: connectorModel,
+  net_label: netLabelModel,
 } as unknown as Record<PartType, DeviceModel<never>>;
 
 export const partCatalog: Record<PartType, PartDefinition> = Object.fromEntries(

@@ -1,6 +1,5 @@
 // Model-free part specs (params, pins, metadata). The sheet schema is built from these;
 // `index.ts` adds the device models to make the full catalogue.
-import { npnSpec, pnpSpec } from './bjt';
 import { dcCurrentSourceSpec } from './dc_current_source';
 import { dcVoltageSourceSpec } from './dc_voltage_source';
 import { diodeSpec } from './diode';
@@ -9,6 +8,8 @@ import { ldrSpec } from './ldr';
 import { ledSpec } from './led';
 import { loadSpec } from './load';
 import { netLabelSpec } from './net_label';
+import { npnSpec } from './npn';
+import { pnpSpec } from './pnp';
 import { ntcSpec } from './ntc';
 import { potentiometerSpec } from './potentiometer';
 import { resistorSpec } from './resistor';

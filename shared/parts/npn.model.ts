@@ -1,0 +1,1 @@
+export { npnModel } from './bjt.model';

@@ -1,0 +1,1 @@
+export { pnpModel } from './bjt.model';
