@@ -1,0 +1,153 @@
+// The schematic editor as a user drives it, in Debian's Chromium against the built client:
+// place a divider from the palette, wire it pin to pin, read the tap voltage on the canvas;
+// drag a potentiometer's slider and watch a reading move; cautions select their part.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { launchBrowser, startBrowserServer, watchPage, type BrowserServer, type PageProblems } from '../support/browser';
+
+let server: BrowserServer;
+let browser: Browser;
+let page: Page;
+let problems: PageProblems;
+
+beforeAll(async () => {
+  server = await startBrowserServer();
+  browser = await launchBrowser();
+  page = await (await browser.newContext({ viewport: { width: 1440, height: 900 } })).newPage();
+  problems = watchPage(page);
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+async function centre(testId: string): Promise<{ x: number; y: number }> {
+  const box = await page.getByTestId(testId).boundingBox();
+  if (!box) throw new Error(`${testId} is not on screen`);
+  return { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+}
+
+/** Place a part from the palette at an offset from the canvas's top-left corner (CSS px). */
+async function place(type: string, dx: number, dy: number) {
+  await page.getByTestId(`palette-${type}`).click();
+  const canvas = await page.getByTestId('schematic-canvas').boundingBox();
+  await page.mouse.click(canvas!.x + dx, canvas!.y + dy);
+}
+
+/** Drag a wire from one pin to another, as a user does. */
+async function wire(from: string, to: string) {
+  const a = await centre(`pin-${from}`);
+  const b = await centre(`pin-${to}`);
+  await page.mouse.move(a.x, a.y);
+  await page.mouse.down();
+  await page.mouse.move((a.x + b.x) / 2, (a.y + b.y) / 2, { steps: 5 });
+  await page.mouse.move(b.x, b.y, { steps: 5 });
+  await page.mouse.up();
+}
+
+async function setField(partId: string, param: string, text: string) {
+  await page.getByTestId(`part-${partId}`).click();
+  const field = page.locator(`#param-${partId}-${param}`);
+  await field.fill(text);
+  await field.press('Enter');
+}
+
+describe('schematic editor', () => {
+  it('builds a divider from the palette, wires it and shows the tap voltage on the canvas', async () => {
+    await page.goto(`${server.baseUrl}/sheets/local`);
+    await page.evaluate(() => localStorage.clear());
+    await page.reload();
+    await page.getByTestId('sheet-editor').waitFor();
+
+    await place('dc_voltage_source', 200, 340);
+    await place('resistor', 420, 200);
+    await place('resistor', 620, 340);
+    await page.keyboard.press('r'); // the new part is selected: stand R2 upright
+    await place('ground', 420, 560);
+    for (const id of ['V1', 'R1', 'R2', 'GND1']) await page.getByTestId(`part-${id}`).waitFor();
+
+    await wire('V1.pos', 'R1.a');
+    await wire('R1.b', 'R2.a');
+    await wire('R2.b', 'GND1.g');
+    await wire('V1.neg', 'GND1.g');
+    await expect.poll(() => page.locator('.react-flow__edge').count()).toBe(4);
+
+    // defaults: 5 V over 10 kΩ / 10 kΩ
+    const tap = page.getByTestId('part-R1').locator('[data-testid^="net-tag-"]');
+    await expect.poll(() => tap.textContent()).toBe('2.5 V');
+
+    await setField('V1', 'voltage', '12');
+    await setField('R1', 'resistance', '27k');
+    await setField('R2', 'resistance', '10k');
+    // ideal divider 12 V · 10k / (27k + 10k) = 3.243243… V (worked value, /work/shared/references.md)
+    await expect.poll(() => tap.textContent()).toBe('3.243 V');
+    expect(Number(await tap.getAttribute('data-volts'))).toBeCloseTo(3.24324324324, 9);
+
+    // the readings table lists the same net, and one undo takes back the last value only
+    await page.getByTestId('panel-tab-readings').click();
+    await expect.poll(() => page.getByTestId('readings-nets').textContent()).toContain('3.243 V');
+    // R2 was 10k already, so the last step is R1 27k: undone, 12 V · 10k / 20k = 6 V
+    await page.getByTestId('undo').click();
+    await expect.poll(() => tap.textContent()).toBe('6 V');
+  });
+
+  it('moves every reading live while the potentiometer slider is dragged, as one undo step', async () => {
+    await page.goto(`${server.baseUrl}/sheets/example-ldr-night-light`);
+    await page.getByTestId('sheet-editor').waitFor();
+    // RV1's w–b section feeds the LDR divider (its wiper is tied to a): the LDR1.a net moves with it
+    const ldrTag = page.getByTestId('part-LDR1').locator('[data-testid^="net-tag-"]');
+    await expect.poll(() => ldrTag.count()).toBe(1);
+    const before = Number(await ldrTag.getAttribute('data-volts'));
+
+    const slider = page.getByTestId('pot-slider-RV1');
+    const box = (await slider.boundingBox())!;
+    const y = box.y + box.height / 2;
+    await page.mouse.move(box.x + box.width * 0.4, y);
+    await page.mouse.down();
+    const seen = new Set<number>();
+    for (const f of [0.5, 0.6, 0.7, 0.8, 0.95]) {
+      await page.mouse.move(box.x + box.width * f, y, { steps: 3 });
+      await page.waitForTimeout(80);
+      seen.add(Number(await ldrTag.getAttribute('data-volts')));
+    }
+    await page.mouse.up();
+    // less track between supply and tap raises the tap; readings changed during the drag, not only after
+    await expect.poll(async () => Number(await ldrTag.getAttribute('data-volts'))).toBeGreaterThan(before + 0.1);
+    expect(seen.size).toBeGreaterThan(1);
+
+    await page.getByTestId('undo').click();
+    await expect.poll(async () => Number(await ldrTag.getAttribute('data-volts'))).toBeCloseTo(before, 6);
+    expect(await page.getByTestId('undo').isDisabled()).toBe(true);
+  });
+
+  it('marks an LED without current limiting, lists it, and selects it from the list', async () => {
+    await page.goto(`${server.baseUrl}/sheets/local`);
+    await page.evaluate(() => localStorage.clear());
+    await page.reload();
+    await page.getByTestId('sheet-editor').waitFor();
+    await place('dc_voltage_source', 200, 300);
+    await place('led', 420, 200);
+    await place('ground', 300, 480);
+    await wire('V1.pos', 'D1.anode');
+    await wire('D1.cathode', 'GND1.g');
+    await wire('V1.neg', 'GND1.g');
+    await page.getByTestId('part-D1').getByTestId('part-warning-D1').waitFor();
+    await page.getByTestId('panel-tab-checks').click();
+    await page.keyboard.press('Escape'); // clear the selection
+    await page.getByTestId('finding-led_no_current_limit-D1').click();
+    await page.getByTestId('panel-tab-part').click();
+    await expect.poll(() => page.getByTestId('designator-input').inputValue()).toBe('D1');
+  });
+
+  it('opens the shortcut help with ? and closes it with Escape', async () => {
+    await page.locator('body').click({ position: { x: 5, y: 300 } });
+    await page.keyboard.press('Shift+?');
+    await page.getByTestId('shortcut-help').waitFor();
+    await page.keyboard.press('Escape');
+    await expect.poll(() => page.getByTestId('shortcut-help').count()).toBe(0);
+  });
+
+  it('ran without script errors', () => {
+    expect(problems.errors).toEqual([]);
+  });
+});
