@@ -2,34 +2,54 @@
 // Newton loop can use it unchanged: the pattern the engine records up front becomes the fixed CSC
 // pattern, the AMD ordering is computed once, and each solve() refactorises numerically.
 import type { LinearSystem, LinearSystemFactory, SingularInfo } from '../engine/linear/types';
+import { cscFromTriplets, type CscMatrix } from './csc';
 import { SingularMatrixError } from './lu-factor';
-import { SparsePatternBuilder } from './sparse-pattern';
 import { SparseLuSolver } from './sparse-solver';
 
 /** Systems up to 2048 unknowns index entries through a flat table (16 MiB at most). */
 const TABLE_LIMIT = 2048 * 2048;
 
+/** The CSC pattern of the recorded positions plus every diagonal (duplicates merged). */
+function patternMatrix(size: number, pattern: ReadonlyArray<readonly [number, number]>): CscMatrix {
+  const hasDiag = new Uint8Array(size);
+  const rows: number[] = [];
+  const cols: number[] = [];
+  for (const [r, c] of pattern) {
+    rows.push(r);
+    cols.push(c);
+    if (r === c) hasDiag[r] = 1;
+  }
+  for (let i = 0; i < size; i++)
+    if (!hasDiag[i]) {
+      rows.push(i);
+      cols.push(i);
+    }
+  const m = cscFromTriplets(size, size, rows, cols, new Float64Array(rows.length));
+  m.values.fill(0);
+  return m;
+}
+
 export class SparseMnaSystem implements LinearSystem {
   readonly solverName = 'sparse-lu (AMD, refactorising)';
+  private readonly matrix: CscMatrix;
   private readonly values: Float64Array;
   private readonly rhs: Float64Array;
-  /** (row·size + col) → value index: a flat table for small systems (fast), a Map for large ones */
+  /** (row·size + col) → value index, for small systems; large ones search the (short) CSC column */
   private readonly table: Int32Array | null;
-  private readonly index = new Map<number, number>();
   private readonly solver: SparseLuSolver;
 
   /** @param pattern every (row, col) that add() will be called with (the diagonal is added anyway) */
   constructor(readonly size: number, pattern: ReadonlyArray<readonly [number, number]>) {
-    const b = new SparsePatternBuilder(size);
-    const slots = pattern.map(([r, c]) => b.slot(r, c));
-    const built = b.build();
-    this.table = size * size <= TABLE_LIMIT ? new Int32Array(size * size).fill(-1) : null;
-    const put = (key: number, at: number) => (this.table ? (this.table[key] = at) : this.index.set(key, at));
-    for (let k = 0; k < pattern.length; k++) put(pattern[k][0] * size + pattern[k][1], built.slotIndex[slots[k]]);
-    for (let i = 0; i < size; i++) put(i * size + i, built.slotIndex[b.slot(i, i)]);
-    this.values = built.matrix.values;
+    this.matrix = patternMatrix(size, pattern);
+    this.values = this.matrix.values;
     this.rhs = new Float64Array(size);
-    this.solver = new SparseLuSolver(built.matrix);
+    if (size * size <= TABLE_LIMIT) {
+      const t = new Int32Array(size * size).fill(-1);
+      const { colPtr, rowIdx } = this.matrix;
+      for (let j = 0; j < size; j++) for (let p = colPtr[j]; p < colPtr[j + 1]; p++) t[rowIdx[p] * size + j] = p;
+      this.table = t;
+    } else this.table = null;
+    this.solver = new SparseLuSolver(this.matrix);
   }
 
   clear(): void {
@@ -38,9 +58,18 @@ export class SparseMnaSystem implements LinearSystem {
   }
 
   add(row: number, col: number, value: number): void {
-    const key = row * this.size + col;
-    const p = this.table ? this.table[key] : this.index.get(key);
-    if (p === undefined || p < 0 || !(row >= 0 && col >= 0 && row < this.size && col < this.size)) throw new Error(`sparse system: entry (${row}, ${col}) is not in the recorded pattern`);
+    let p = -1;
+    if (this.table) {
+      if (row >= 0 && col >= 0 && row < this.size && col < this.size) p = this.table[row * this.size + col];
+    } else if (col >= 0 && col < this.size) {
+      const { colPtr, rowIdx } = this.matrix;
+      for (let q = colPtr[col]; q < colPtr[col + 1]; q++)
+        if (rowIdx[q] === row) {
+          p = q;
+          break;
+        }
+    }
+    if (p < 0) throw new Error(`sparse system: entry (${row}, ${col}) is not in the recorded pattern`);
     this.values[p] += value;
   }
 

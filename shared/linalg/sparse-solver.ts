@@ -68,15 +68,13 @@ export class SparseLuSolver {
     this.factors = null;
     this.full++;
     if (this.staticPivotFirst) {
-      if (this.tryStatic(this.order)) return;
+      // first time: move zero-diagonal (source-branch) variables behind a neighbour before trying
       if (!this.deferralTried) {
         this.deferralTried = true;
         const alt = deferZeroDiagonals(this.pattern, this.order);
-        if (alt && this.tryStatic(alt)) {
-          this.order = alt;
-          return;
-        }
+        if (alt) this.order = alt;
       }
+      if (this.tryStatic(this.order)) return;
     }
     this.factors = luFactor(this.pattern, this.order, this.pivotTolerance);
     this.staticPivots = false;
