@@ -10,6 +10,6 @@ export function ensureDependencies(root) {
   const fresh = fs.existsSync(marker) && fs.statSync(marker).mtimeMs >= fs.statSync(lock).mtimeMs - 1000;
   if (fresh) return;
   note('Installing dependencies (npm ci)...');
-  const r = spawnSync('npm', ['ci', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
+  const r = spawnSync('npm', ['ci', '--no-audit', '--no-fund', '--loglevel=warn'], { cwd: root, stdio: 'inherit' });
   if (r.status !== 0) fail('`npm ci` failed (see above).', 'Check the network access to the npm registry and your Node.js version (20.19 or newer).');
 }
