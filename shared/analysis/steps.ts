@@ -24,10 +24,11 @@ export function stepValues(s: StepSpec, what = 'sweep'): Float64Array {
   if (s.scale === 'log') {
     if (s.from === 0 || s.to === 0 || Math.sign(s.from) !== Math.sign(s.to))
       throw new AnalysisInputError(`${what}: a logarithmic sweep needs from and to of the same sign and not zero (got ${s.from} to ${s.to}); use a linear sweep to cross zero.`);
-    const a = Math.log(Math.abs(s.from));
-    const b = Math.log(Math.abs(s.to));
+    // base 10 so that decade points come out exact (10 ** 1 is 10, e^ln 10 is not)
+    const a = Math.log10(Math.abs(s.from));
+    const b = Math.log10(Math.abs(s.to));
     const sign = Math.sign(s.from);
-    for (let i = 0; i < n; i++) out[i] = sign * Math.exp(a + ((b - a) * i) / (n - 1));
+    for (let i = 0; i < n; i++) out[i] = sign * 10 ** (a + ((b - a) * i) / (n - 1));
   } else {
     for (let i = 0; i < n; i++) out[i] = s.from + ((s.to - s.from) * i) / (n - 1);
   }
