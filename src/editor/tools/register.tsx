@@ -1,12 +1,10 @@
-// Registers the design tools with the editor (src/editor/extensions.ts): three inspector tabs and
+// Registers the design tools with the editor (src/editor/extensions.ts): one inspector tab (sweep, tolerance, budget) and
 // two toolbar tools. Imported once by src/routes.tsx.
 import { useEffect } from 'react';
 import { useParams } from 'react-router-dom';
 import { registerPanelTab, registerToolbarTool } from '../extensions';
 import { openToolSession, useToolSession } from './results/toolSession';
-import { SweepPanel } from './sweep/SweepPanel';
-import { TolerancePanel } from './tolerance/TolerancePanel';
-import { BudgetPanel } from './budget/BudgetPanel';
+import { AnalysisTab, ANALYSE_TAB_ID } from './AnalysisTab';
 import { DesignerDialog, useDesignerUi } from './designer/DesignerDialog';
 import { ExportMenu } from './export/ExportMenu';
 import './tools.css';
@@ -42,9 +40,7 @@ let registered = false;
 export function registerDesignTools(): void {
   if (registered) return;
   registered = true;
-  registerPanelTab({ id: 'sweep', label: 'Sweep', order: 50, render: () => <WithSession><SweepPanel /></WithSession> });
-  registerPanelTab({ id: 'tolerance', label: 'Tolerance', order: 60, render: () => <WithSession><TolerancePanel /></WithSession> });
-  registerPanelTab({ id: 'budget', label: 'Budget', order: 70, render: () => <WithSession><BudgetPanel /></WithSession> });
+  registerPanelTab({ id: ANALYSE_TAB_ID, label: 'Analyse', order: 50, render: () => <WithSession><AnalysisTab /></WithSession> });
   registerToolbarTool({ id: 'designer', order: 10, render: () => <DesignButton /> });
   registerToolbarTool({ id: 'export', order: 20, render: () => <WithSession><ExportMenu /></WithSession> });
 }

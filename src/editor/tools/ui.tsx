@@ -26,11 +26,11 @@ export function Button({ variant = 'plain', className = '', ...rest }: ButtonHTM
   return <button type="button" className={`h-7 rounded border px-2.5 text-sm font-medium disabled:cursor-not-allowed disabled:opacity-50 ${look} ${className}`} {...rest} />;
 }
 
-export function Section({ title, children, actions }: { title: string; children: ReactNode; actions?: ReactNode }) {
+export function Section({ title, children, actions, plainTitle }: { title: string; children: ReactNode; actions?: ReactNode; plainTitle?: boolean }) {
   return (
     <section className="border-b border-rule px-3 py-2.5">
       <div className="mb-1.5 flex items-center gap-2">
-        <h3 className="text-xs font-semibold uppercase tracking-wide text-ink-muted">{title}</h3>
+        <h3 className={plainTitle ? 'num text-sm font-semibold text-ink' : 'text-xs font-semibold uppercase tracking-wide text-ink-muted'}>{title}</h3>
         <div className="ml-auto flex items-center gap-1.5">{actions}</div>
       </div>
       {children}

@@ -34,7 +34,15 @@ export function DesignerDialog() {
     <dialog
       ref={ref}
       onClose={close}
-      className="m-auto max-h-[90vh] w-[min(860px,94vw)] overflow-hidden rounded-lg border border-rule bg-panel p-0 text-ink shadow-xl backdrop:bg-black/40"
+      // keys typed in the dialog are the dialog's: the editor's canvas shortcuts (Delete, R, Escape) must not see them
+      onKeyDown={(e) => {
+        e.stopPropagation();
+        if (e.key === 'Escape') {
+          e.preventDefault();
+          close();
+        }
+      }}
+      className="m-auto max-h-[90vh] w-[min(860px,94vw)] overflow-hidden rounded-lg border border-rule bg-panel p-0 text-ink shadow-xl backdrop:bg-[rgb(0_0_0/0.45)]"
       aria-label="Design helpers"
       data-testid="designer-dialog"
     >

@@ -71,7 +71,8 @@ export function SweepPanel() {
     handle.current?.cancel();
     const scales = spec.axes.map((a) => a.steps.scale ?? 'linear');
     const snapshot = sheet;
-    useToolSession.setState({ sheet: snapshot });
+    // keep the form with the result: the report plots the outputs chosen here
+    useToolSession.setState({ sheet: snapshot, sweepForm: form });
     handle.current = startRun(
       runSetter('sweep'),
       async (signal, onProgress) => sweepDataFrom(await sweepJob(analysisPool(), snapshot, spec, { signal, onProgress }), scales),
@@ -101,7 +102,7 @@ export function SweepPanel() {
             <select className={inputClass} value={form.targetKey} onChange={(e) => pick(e.target.value)} data-testid="sweep-target">
               {choices.map((c) => (
                 <option key={c.key} value={c.key}>
-                  {c.label} ({c.key}){c.unit ? `, ${c.unit}` : ''}
+                  {c.label}{c.unit ? ` (${c.unit})` : ''}
                 </option>
               ))}
             </select>

@@ -25,14 +25,20 @@ export function sweepPlotOptions(model: SweepPlotModel, data: SweepData, height 
       ...extra,
     });
     const [u0, u1] = model.units;
+    // name the outputs on their axis when there are few of them
+    const yLabel = (unit: string | undefined) => {
+      const names = [...new Set(model.series.filter((s) => s.unit === unit && s.kind === 'simulated').map((s) => s.output))];
+      const u = unit ? ` (${unit})` : '';
+      return names.length && names.length <= 2 ? `${names.join(', ')}${u}` : u.trim();
+    };
     return {
       width,
       height,
       scales: { x: { time: false, distr: data.x.scale === 'log' ? 3 : 1 }, y: { auto: true }, ...(u1 !== undefined ? { y2: { auto: true } } : {}) },
       axes: [
         axis(`${data.x.key}${data.x.unit ? ` (${data.x.unit})` : ''}`),
-        axis(u0 ? `(${u0})` : '', { scale: 'y', size: 60 }),
-        ...(u1 !== undefined ? [axis(u1 ? `(${u1})` : '', { scale: 'y2', side: 1, grid: { show: false }, size: 60 })] : []),
+        axis(yLabel(u0), { scale: 'y', size: 60 }),
+        ...(u1 !== undefined ? [axis(yLabel(u1), { scale: 'y2', side: 1, grid: { show: false }, size: 60 })] : []),
       ],
       series: [
         { label: data.x.key },

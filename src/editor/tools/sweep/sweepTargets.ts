@@ -54,7 +54,7 @@ export function sweepChoices(sheet: Sheet): SweepChoice[] {
       out.push({
         target: { kind: 'param', part: part.id, param: info.name },
         key: `${part.id}.${info.name}`,
-        label: `${part.id} ${info.label.toLowerCase()}`,
+        label: `${part.id} · ${info.label.toLowerCase()}`,
         unit: info.unit,
         nominal,
         ...defaultRange(info, nominal, params),

@@ -17,7 +17,7 @@ export function histogramData(h: Histogram): uPlot.AlignedData {
   return [centres, h.counts];
 }
 
-export function histogramOptions(h: Histogram, unit: string, marks: HistogramMarks, height: number) {
+export function histogramOptions(h: Histogram, unit: string, marks: HistogramMarks, height: number, label = '') {
   return (width: number, theme: PlotTheme): uPlot.Options => {
     const xs = [h.edges[0], h.edges[h.edges.length - 1], marks.spec?.min, marks.spec?.max, marks.worstCase?.min, marks.worstCase?.max].filter(
       (v): v is number => typeof v === 'number' && Number.isFinite(v),
@@ -52,7 +52,7 @@ export function histogramOptions(h: Histogram, unit: string, marks: HistogramMar
       width,
       height,
       scales: { x: { time: false, range: [lo - pad, hi + pad] }, y: { range: (_u, _min, max) => [0, Math.max(1, max * 1.08)] } },
-      axes: [axis(unit ? `(${unit})` : '', { values: (_u, s) => s.map((v) => formatEng(v, '', { digits: 4 })) }), axis('samples', { size: 50 })],
+      axes: [axis(`${label}${unit ? ` (${unit})` : ''}`.trim(), { values: (_u, s) => s.map((v) => formatEng(v, '', { digits: 4 })) }), axis('samples', { size: 50 })],
       series: [
         {},
         {
@@ -80,9 +80,9 @@ export function histogramOptions(h: Histogram, unit: string, marks: HistogramMar
   };
 }
 
-export function HistogramPlot({ histogram, unit, marks, theme, height = 180, chartRef, testId }: { histogram: Histogram; unit: string; marks: HistogramMarks; theme?: PlotTheme; height?: number; chartRef?: (u: uPlot | null) => void; testId?: string }) {
+export function HistogramPlot({ histogram, unit, label, marks, theme, height = 180, chartRef, testId }: { histogram: Histogram; unit: string; label?: string; marks: HistogramMarks; theme?: PlotTheme; height?: number; chartRef?: (u: uPlot | null) => void; testId?: string }) {
   const data = useMemo(() => histogramData(histogram), [histogram]);
   // eslint-disable-next-line react-hooks/exhaustive-deps
-  const makeOptions = useCallback(histogramOptions(histogram, unit, marks, height), [histogram, unit, marks.spec?.min, marks.spec?.max, marks.worstCase?.min, marks.worstCase?.max, height]);
+  const makeOptions = useCallback(histogramOptions(histogram, unit, marks, height, label), [histogram, unit, label, marks.spec?.min, marks.spec?.max, marks.worstCase?.min, marks.worstCase?.max, height]);
   return <UPlotChart makeOptions={makeOptions} data={data} theme={theme} chartRef={chartRef} testId={testId} />;
 }

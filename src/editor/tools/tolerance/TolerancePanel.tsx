@@ -30,7 +30,7 @@ export function TolerancePanel() {
     setProblem(null);
     for (const h of handles.current) h.cancel();
     const snapshot = sheet;
-    useToolSession.setState({ sheet: snapshot });
+    useToolSession.setState({ sheet: snapshot, toleranceForm: form });
     const pool = analysisPool();
     handles.current = [
       startRun(runSetter('worstCase'), (signal) => worstCaseJob(pool, snapshot, req.worstCase, { signal }), key),
@@ -77,9 +77,9 @@ export function TolerancePanel() {
           <Field label="Seed">
             <input className={inputClass} type="number" value={form.seed} onChange={(e) => set({ seed: Number(e.target.value) })} />
           </Field>
-          <Field label="Distribution">
+          <Field label="Distribution" hint={form.distribution === 'normal' ? '±tolerance = 3σ' : 'flat over ±tolerance'}>
             <select className={inputClass} value={form.distribution} onChange={(e) => set({ distribution: e.target.value as 'normal' | 'uniform' })}>
-              <option value="normal">normal (±tol = 3σ)</option>
+              <option value="normal">normal</option>
               <option value="uniform">uniform</option>
             </select>
           </Field>
@@ -101,7 +101,7 @@ export function TolerancePanel() {
         const w = wc?.outputs.find((o) => o.key === k);
         const m = mc?.outputs.find((o) => o.key === k);
         return (
-          <Section key={k} title={k}>
+          <Section key={k} title={k} plainTitle>
             {w && <WorstCaseSummary wc={w} />}
             {m && <div className="mt-2"><MonteCarloSummary mc={m} wc={w} /></div>}
           </Section>

@@ -26,8 +26,8 @@ export function WorstCaseSummary({ wc }: { wc: WorstCaseOutput }) {
             <tr>
               <th>drives the spread</th>
               <th className="r">share</th>
-              <th className="r">for max</th>
-              <th className="r">for min</th>
+              <th className="r">at max</th>
+              <th className="r">at min</th>
             </tr>
           </thead>
           <tbody>
@@ -35,8 +35,8 @@ export function WorstCaseSummary({ wc }: { wc: WorstCaseOutput }) {
               <tr key={c.key}>
                 <td>{c.key}</td>
                 <td className="r">{fmtPct(c.share, 3)}</td>
-                <td className="r">{wc.max.sides[c.key] ?? '—'} (+{fmtQ(c.towardMax, u, 3)})</td>
-                <td className="r">{wc.min.sides[c.key] ?? '—'} ({fmtQ(c.towardMin, u, 3)})</td>
+                <td className="r" title={`moves the output by +${fmtQ(c.towardMax, u, 3)}`}>{wc.max.sides[c.key] ?? '—'}</td>
+                <td className="r" title={`moves the output by ${fmtQ(c.towardMin, u, 3)}`}>{wc.min.sides[c.key] ?? '—'}</td>
               </tr>
             ))}
           </tbody>
@@ -55,6 +55,7 @@ export function MonteCarloSummary({ mc, wc, theme, height }: { mc: McOutput; wc?
       <HistogramPlot
         histogram={s.histogram}
         unit={u}
+        label={mc.key}
         marks={{ spec: s.yield?.window, worstCase: wc ? { min: wc.min.value, max: wc.max.value } : undefined }}
         theme={theme}
         height={height}
