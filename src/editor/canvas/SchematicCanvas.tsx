@@ -25,6 +25,8 @@ import { notify } from '../notices';
 
 const nodeTypes = { part: PartNode };
 const edgeTypes = { wire: WireEdge };
+/** Zoom to fit, but never so far out that values become unreadable (pan for the rest). */
+export const FIT = { padding: 0.2, maxZoom: 1.4, minZoom: 0.75 };
 export const PART_DRAG_MIME = 'application/x-tapline-part';
 
 export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
@@ -169,7 +171,7 @@ export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
           minZoom={0.2}
           maxZoom={4}
           fitView
-          fitViewOptions={{ padding: 0.25, maxZoom: 1.4 }}
+          fitViewOptions={FIT}
           aria-label="Schematic canvas"
         >
           <Background id="minor" variant={BackgroundVariant.Dots} gap={GRID} size={1.3} color="var(--tl-rule)" />

@@ -21,6 +21,8 @@ export function fieldUnit(info: ParamInfo): string {
 export function formatParamValue(info: ParamInfo, value: unknown): string {
   if (typeof value !== 'number' || !Number.isFinite(value)) return value === undefined ? '' : String(value);
   if (isPercentParam(info)) return String(Number((value * 100).toPrecision(4)));
+  // a plain ratio (wiper position, β, γ) reads better without SI prefixes: 0.4, not 400m
+  if (info.unit === '' && Math.abs(value) >= 1e-3 && Math.abs(value) < 1e6) return String(Number(value.toPrecision(4)));
   // Four significant figures: enough for E192 values (1.02k) without float noise.
   return formatEng(value, '', { digits: 4 });
 }

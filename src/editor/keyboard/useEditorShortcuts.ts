@@ -7,6 +7,7 @@ import { commandFor, PLACE_KEYS } from './shortcuts';
 import { GRID } from '../symbols/geometry';
 import type { Fragment } from '../store/commands';
 import { notify } from '../notices';
+import { FIT } from '../canvas/SchematicCanvas';
 import type { PartType } from '../../../shared/parts/specs';
 import { parseSheet } from '../../../shared/sheet';
 
@@ -78,7 +79,7 @@ export function useEditorShortcuts(editor: Editor, h: ShortcutHandlers): void {
         case 'delete': return a.deleteSelection();
         case 'rotateCw': return a.rotateSelection(1);
         case 'rotateCcw': return a.rotateSelection(-1);
-        case 'fit': return void rf.fitView({ padding: 0.25, maxZoom: 1.4 });
+        case 'fit': return void rf.fitView(FIT);
         case 'zoomIn': return void rf.zoomIn();
         case 'zoomOut': return void rf.zoomOut();
         case 'escape':

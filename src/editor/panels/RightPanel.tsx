@@ -37,7 +37,8 @@ export function RightPanel() {
   const current = tabs.find((t) => t.id === active) ?? tabs[0];
   return (
     <aside className="flex h-full min-h-0 flex-col border-l border-rule bg-panel" aria-label="Inspector">
-      <div role="tablist" aria-label="Inspector tabs" className="flex shrink-0 gap-0.5 overflow-x-auto border-b border-rule px-2 pt-1.5">
+      {/* pills that wrap: every tab stays visible however many tools register one */}
+      <div role="tablist" aria-label="Inspector tabs" className="flex shrink-0 flex-wrap gap-1 border-b border-rule px-2 py-1.5">
         {tabs.map((t) => {
           const on = t.id === current.id;
           return (
@@ -50,8 +51,8 @@ export function RightPanel() {
               id={`tab-${t.id}`}
               data-testid={`panel-tab-${t.id}`}
               onClick={() => openTab(t.id)}
-              className={`-mb-px flex items-center gap-1.5 whitespace-nowrap rounded-t border px-2.5 py-1 text-[12px] ${
-                on ? 'border-rule border-b-panel bg-panel font-medium text-ink' : 'border-transparent text-ink-muted hover:text-ink'
+              className={`flex items-center gap-1.5 whitespace-nowrap rounded px-2 py-0.5 text-[12px] ${
+                on ? 'bg-sunken font-medium text-ink shadow-[inset_0_-2px_0_var(--tl-accent)]' : 'text-ink-muted hover:bg-sunken/60 hover:text-ink'
               }`}
             >
               {t.label}

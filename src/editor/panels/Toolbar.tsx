@@ -7,6 +7,7 @@ import { useExtensionRegistry } from '../extensions';
 import { useEditorUi } from '../uiState';
 import { listExamples } from '../sources/exampleSources';
 import type { SaveStatus } from '../useAutosave';
+import { FIT } from '../canvas/SchematicCanvas';
 
 function SaveBadge({ status }: { status: SaveStatus }) {
   const text =
@@ -66,17 +67,17 @@ export function Toolbar({ title, notice, status }: { title: string; notice?: str
   const examples = listExamples();
   return (
     <div className="flex h-11 shrink-0 items-center gap-1 border-b border-rule bg-panel px-3" role="toolbar" aria-label="Editor">
-      <div className="mr-2 flex min-w-0 flex-col justify-center">
+      <div className="mr-2 flex min-w-0 flex-1 flex-col justify-center">
         <h1 className="truncate text-[14px] font-semibold leading-tight" data-testid="sheet-title">
           {docTitle || title}
           {readOnly && <span className="ml-2 rounded bg-sunken px-1.5 text-[10px] font-medium uppercase text-ink-muted">read-only</span>}
         </h1>
-        <div className="flex items-center gap-2 leading-tight">
+        <div className="flex min-w-0 items-center gap-2 whitespace-nowrap leading-tight">
           <SaveBadge status={status} />
           {notice && <span className="truncate text-[11px] text-caution" title={notice}>{notice}</span>}
         </div>
       </div>
-      <div className="ml-auto flex items-center gap-0.5">
+      <div className="ml-auto flex shrink-0 items-center gap-0.5 whitespace-nowrap">
         <Btn label={history.undoLabel ? `Undo: ${history.undoLabel}` : 'Undo'} onClick={() => editor.actions.undo()} disabled={!history.canUndo || readOnly} testId="undo">↶</Btn>
         <Btn label={history.redoLabel ? `Redo: ${history.redoLabel}` : 'Redo'} onClick={() => editor.actions.redo()} disabled={!history.canRedo || readOnly} testId="redo">↷</Btn>
         <Sep />
@@ -84,7 +85,7 @@ export function Toolbar({ title, notice, status }: { title: string; notice?: str
         <Btn label="Delete selection (Delete)" onClick={() => editor.actions.deleteSelection()} disabled={!hasSel || readOnly} testId="delete">✕</Btn>
         <Sep />
         <Btn label="Zoom out (−)" onClick={() => void rf.zoomOut()}>−</Btn>
-        <Btn label="Zoom to fit (F)" onClick={() => void rf.fitView({ padding: 0.25, maxZoom: 1.4 })} testId="zoom-fit">⤢</Btn>
+        <Btn label="Zoom to fit (F)" onClick={() => void rf.fitView(FIT)} testId="zoom-fit">⤢</Btn>
         <Btn label="Zoom in (+)" onClick={() => void rf.zoomIn()}>+</Btn>
         <Sep />
         <Btn label="Show readings on parts (V)" pressed={ui.showReadings} onClick={() => ui.setPrefs({ showReadings: !ui.showReadings })} testId="toggle-readings">
@@ -107,7 +108,7 @@ export function Toolbar({ title, notice, status }: { title: string; notice?: str
         ))}
         <Sep />
         <details className="relative">
-          <summary className="flex h-7 cursor-pointer list-none items-center rounded px-2 text-[12px] text-ink-muted hover:bg-sunken hover:text-ink" data-testid="examples-menu">
+          <summary className="flex h-7 cursor-pointer list-none items-center whitespace-nowrap rounded px-2 text-[12px] text-ink-muted hover:bg-sunken hover:text-ink" data-testid="examples-menu">
             Examples ▾
           </summary>
           <ul className="absolute right-0 z-40 mt-1 w-72 rounded border border-rule bg-panel py-1 shadow-lg">
