@@ -24,7 +24,7 @@ function Settings({ id, me }: { id: string; me: Me }) {
       <MembersSection project={p} me={me} />
       {owner ? <InvitationsSection project={p} /> : null}
       <RevisionsSection project={p} />
-      {owner ? <ShareSection project={p} /> : null}
+      {owner ? <ShareSection key={String(p.share?.enabled)} project={p} /> : null}
       {owner ? <DangerSection project={p} /> : null}
     </div>
   );

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useSetShare } from '../projectQueries';
 import { cloudPaths } from '../routeIds';
 import type { ProjectDetail } from '../types';
@@ -5,16 +6,22 @@ import { ErrorNote, Section } from '../ui';
 
 export function ShareSection({ project }: { project: ProjectDetail }) {
   const share = useSetShare(project.id);
-  const enabled = project.share?.enabled ?? false;
+  // The box follows the click at once (a controlled box would spring back until the cache moves);
+  // the page re-keys this section when the server's answer changes `share.enabled`.
+  const [enabled, setEnabled] = useState(project.share?.enabled ?? false);
   const token = project.share?.token;
   const url = token ? `${window.location.origin}${cloudPaths.shared(token)}` : null;
   return (
     <Section title="Read-only share link" id="share">
       <label className="flex items-center gap-2 text-sm">
-        <input type="checkbox" checked={enabled} disabled={share.isPending} onChange={(e) => share.mutate(e.target.checked)} />
+        <input type="checkbox" checked={enabled} disabled={share.isPending} onChange={(e) => {
+          const on = e.target.checked;
+          setEnabled(on);
+          share.mutate(on, { onError: () => setEnabled(!on) });
+        }} />
         Anyone with the link can view and solve this sheet (no sign-in, no editing)
       </label>
-      {enabled && url ? (
+      {enabled && url && !share.isPending ? (
         <p className="mt-2 text-sm">
           <input readOnly aria-label="Share link" className="w-full rounded border border-rule bg-sunken px-2 py-1 font-mono text-xs" value={url} onFocus={(e) => e.target.select()} />
           <span className="text-ink-muted">Turning the link off makes this address stop working; turning it on again makes a new one.</span>
