@@ -7,7 +7,8 @@ import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { desc } from 'drizzle-orm';
-import { createApp } from '../../server/app';
+import { createApp, sessionHandlersOf } from '../../server/app';
+import { attachRealtime } from '../../server/realtime/attach';
 import { loadConfig, type Config } from '../../server/config';
 import { devMail } from '../../server/db/schema';
 import { startMail } from '../../server/mail/mailer';
@@ -30,7 +31,10 @@ export interface BrowserServer {
   close(): Promise<void>;
 }
 
-/** Starts the whole app (API + built client) on 127.0.0.1 with a database of its own. */
+/**
+ * Starts the whole app (API, live co-editing sockets, built client) on 127.0.0.1 with a database
+ * of its own, as `server/main.ts` does. `env` overrides configuration.
+ */
 export async function startBrowserServer(env: Record<string, string> = {}): Promise<BrowserServer> {
   if (!fs.existsSync(path.join(distDir, 'index.html'))) {
     throw new Error('dist/index.html is missing: build the client with `npx vite build` before the browser tests (npm test does this).');
@@ -40,6 +44,8 @@ export async function startBrowserServer(env: Record<string, string> = {}): Prom
   const mail = await startMail(config, t.database);
   const app = createApp({ config, database: t.database, mail, staticDir: distDir });
   const server = http.createServer(app);
+  // One process, so socket.io rooms need not go through PostgreSQL.
+  const realtime = attachRealtime(server, { config, database: t.database, sessionHandlers: sessionHandlersOf(app), clustered: false });
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
   const { port } = server.address() as AddressInfo;
   return {
@@ -49,7 +55,7 @@ export async function startBrowserServer(env: Record<string, string> = {}): Prom
     mailbox: () => t.database.db.select().from(devMail).orderBy(desc(devMail.id)),
     async close() {
       server.closeAllConnections();
-      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await realtime.close(); // closes the HTTP server too
       await mail?.close();
       await t.drop();
     },
