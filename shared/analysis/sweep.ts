@@ -11,7 +11,8 @@ import { AnalysisInputError, resolveTarget, solveOptionsFor, type ParamTarget } 
 
 export interface SweepAxis {
   target: ParamTarget;
-  steps: StepSpec;
+  /** explicit steps, or `overRange`: from the target's declared range (a supply's min to max) */
+  steps: StepSpec | { overRange: true; points: number; scale?: 'linear' | 'log' };
 }
 
 export interface SweepSpec {
@@ -88,7 +89,12 @@ export function runSweep(circuit: PreparedCircuit | unknown, spec: SweepSpec, co
   if (spec.axes.length < 1 || spec.axes.length > 2) throw new AnalysisInputError('A sweep has one or two axes.');
   const resolved = spec.axes.map((a) => resolveTarget(p.sheet, a.target));
   if (resolved.length === 2 && resolved[0].key === resolved[1].key) throw new AnalysisInputError(`Both sweep axes vary ${resolved[0].key}; choose two different parameters.`);
-  const axisValues = spec.axes.map((a, i) => stepValues(a.steps, `sweep of ${resolved[i].key}`));
+  const axisValues = spec.axes.map((a, i) => {
+    const r = resolved[i];
+    if (!('overRange' in a.steps)) return stepValues(a.steps, `sweep of ${r.key}`);
+    if (!r.range) throw new AnalysisInputError(`${r.key} has no declared range to sweep over; give it min and max on the sheet, or sweep from one value to another.`);
+    return stepValues({ from: r.range.min, to: r.range.max, points: a.steps.points, scale: a.steps.scale }, `sweep of ${r.key}`);
+  });
   const outer = axisValues[0];
   const inner = axisValues[1] ?? Float64Array.of(NaN);
   const nOuter = outer.length;

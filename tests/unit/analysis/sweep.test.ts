@@ -92,3 +92,12 @@ describe('sweeps equal independent operating-point solves', () => {
     expect(() => runSweep(divider(), { axes: [{ target: { kind: 'param', part: 'R1', param: 'ohms' }, steps: { from: 1, to: 2, points: 2 } }] })).toThrow(/no numeric param "ohms".*resistance/);
   });
 });
+
+describe('sweep over a declared supply range', () => {
+  it('uses the supply min and max', () => {
+    const t = runSweep(divider({ vMin: 10.8, vMax: 13.2 }), { axes: [{ target: { kind: 'param', part: 'V1', param: 'voltage' }, steps: { overRange: true, points: 3 } }] });
+    expect(t.axes[0].values).toEqual([10.8, 12, 13.2]);
+    expect(t.columns['V(tap)'][2]).toBeCloseTo((13.2 * 10) / 37, 12);
+    expect(() => runSweep(divider(), { axes: [{ target: { kind: 'param', part: 'V1', param: 'voltage' }, steps: { overRange: true, points: 3 } }] })).toThrow(/no declared range/);
+  });
+});
