@@ -154,6 +154,7 @@ export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
           onPaneClick={onPaneClick}
           onPaneMouseMove={onPaneMouseMove}
           onPaneMouseLeave={() => setGhost(null)}
+          onMoveEnd={(_e, vp) => editor.updateSession((s) => void (s.viewport = { x: vp.x, y: vp.y, zoom: vp.zoom }))}
           isValidConnection={(c) => !(c.source === c.target && c.sourceHandle === c.targetHandle)}
           connectionMode={ConnectionMode.Loose}
           connectionRadius={18}

@@ -94,5 +94,10 @@ export function commandFor(e: Pick<KeyboardEvent, 'key' | 'ctrlKey' | 'metaKey' 
 
 /** Show "Mod" as the platform's key. */
 export function displayKeys(keys: string, mac: boolean): string {
-  return keys.replace('Mod', mac ? '⌘' : 'Ctrl');
+  return keys
+    .replace('Mod', mac ? '⌘' : 'Ctrl')
+    .replace('ArrowLeft', '←')
+    .replace('ArrowRight', '→')
+    .replace('ArrowUp', '↑')
+    .replace('ArrowDown', '↓');
 }
