@@ -86,6 +86,17 @@ describe('projects', () => {
     expect(missing.body.error.field).toBe('baseVersion');
   });
 
+  it('accepts exactly one of several simultaneous saves based on the same version', async () => {
+    const { body: p } = await ada.post('/api/projects').send({ title: 'Race', sheet: dividerSheet() });
+    const answers = await Promise.all([1000, 2000, 3000, 4000, 5000].map((r) => ada.patch(`/api/projects/${p.id}`).send({ sheet: dividerWithR2(r), baseVersion: 1 })));
+    const statuses = answers.map((a) => a.status).sort();
+    expect(statuses).toEqual([200, 409, 409, 409, 409]);
+    const winner = answers.find((a) => a.status === 200)!;
+    const [row] = await s.t.database.db.select().from(projects).where(eq(projects.id, p.id));
+    expect(row.version).toBe(2);
+    expect(row.sheet).toEqual(winner.body.sheet);
+  });
+
   it('renames without bumping the sheet version', async () => {
     const { body: p } = await ada.post('/api/projects').send({ title: 'Old name' });
     const res = await ada.patch(`/api/projects/${p.id}`).send({ title: 'New name', baseVersion: 1 });
