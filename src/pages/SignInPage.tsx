@@ -26,7 +26,7 @@ export function SignInPage() {
       <ErrorNote error={providers.error} />
       {providers.data ? (
         <div className="mt-6 space-y-4">
-          <a className={buttonClass} href={signInHref(returnTo)}>
+          <a className={`${buttonClass} inline-block`} href={signInHref(returnTo)}>
             {providers.data.mode === 'github' ? 'Sign in with GitHub' : 'Sign in (local test provider)'}
           </a>
           {providers.data.mode === 'fake' ? (
