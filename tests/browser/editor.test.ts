@@ -139,6 +139,34 @@ describe('schematic editor', () => {
     await expect.poll(() => page.getByTestId('designator-input').inputValue()).toBe('D1');
   });
 
+  it('saves an edited example as the local sheet, keeps editing in place, and drags a part as one undo step', async () => {
+    await page.goto(`${server.baseUrl}/sheets/local`);
+    await page.evaluate(() => localStorage.clear());
+    await page.goto(`${server.baseUrl}/sheets/example-battery-divider`);
+    await page.getByTestId('sheet-editor').waitFor();
+    await setField('R2', 'resistance', '12k');
+    await page.waitForURL((u) => u.pathname === '/sheets/local');
+    await expect.poll(() => page.getByTestId('save-status').textContent()).toMatch(/^Saved/);
+    // still the same editor: the edit can be undone
+    expect(await page.getByTestId('undo').isDisabled()).toBe(false);
+
+    const part = page.getByTestId('part-R1');
+    const before = (await part.boundingBox())!;
+    await page.mouse.move(before.x + before.width / 2, before.y + before.height / 2);
+    await page.mouse.down();
+    for (let i = 1; i <= 6; i++) await page.mouse.move(before.x + before.width / 2 + 20 * i, before.y + before.height / 2, { steps: 2 });
+    await page.mouse.up();
+    await expect.poll(async () => (await part.boundingBox())!.x).toBeGreaterThan(before.x + 60);
+    await page.getByTestId('undo').click();
+    await expect.poll(async () => Math.round((await part.boundingBox())!.x)).toBe(Math.round(before.x));
+
+    await page.reload();
+    await page.getByTestId('sheet-editor').waitFor();
+    expect(await page.getByTestId('sheet-title').textContent()).toContain('12 V battery monitor tap');
+    await page.getByTestId('part-R2').click();
+    expect(await page.locator('#param-R2-resistance').inputValue()).toBe('12k');
+  });
+
   it('opens the shortcut help with ? and closes it with Escape', async () => {
     await page.locator('body').click({ position: { x: 5, y: 300 } });
     await page.keyboard.press('Shift+?');
