@@ -1,6 +1,6 @@
 // Document commands: pure recipes over a draft sheet. The store runs them through applyLocal,
 // so each one is an undoable, syncable patch batch. Positions are part centres, canvas units.
-import type { Draft } from 'immer';
+import { original, type Draft } from 'immer';
 import { nextPartId, splitPinRef, type Part, type PartType, type Position, type Rotation, type Sheet, type Wire } from '../../../shared/sheet';
 import { partSpecs } from '../../../shared/parts/specs';
 import { GRID, pinPosition, rotateOffset, snapToGrid, SYMBOL_GEOMETRY } from '../symbols/geometry';
@@ -35,12 +35,14 @@ function findPart(d: D, id: string): Draft<Part> | undefined {
 
 /** Move parts to new centres (already snapped by the canvas). */
 export function moveParts(d: D, centers: Record<string, Position>): void {
-  for (const p of d.parts) {
+  // Look the parts up in the base array: touching every draft part would make immer proxy all of
+  // them on each frame of a drag.
+  const base = (original(d.parts) ?? d.parts) as readonly Part[];
+  base.forEach((p, i) => {
     const c = centers[p.id];
-    if (!c) continue;
-    if (p.position?.x === c.x && p.position?.y === c.y) continue;
-    p.position = { x: c.x, y: c.y };
-  }
+    if (!c || (p.position?.x === c.x && p.position?.y === c.y)) return;
+    d.parts[i].position = { x: c.x, y: c.y };
+  });
 }
 
 /**
