@@ -135,7 +135,20 @@ export function luFactor(a: CscMatrix, colPerm: Int32Array, pivotTolerance = 0.1
       const J = pinv[j];
       if (J < 0) continue;
       const xj = x[j];
-      for (let p = Lp[J] + 1; p < Lp[J + 1]; p++) x[Li[p]] -= Lx[p] * xj;
+      if (xj === 0) continue;
+      let p = Lp[J] + 1;
+      const end = Lp[J + 1];
+      for (; p + 3 < end; p += 4) {
+        const i0 = Li[p];
+        const i1 = Li[p + 1];
+        const i2 = Li[p + 2];
+        const i3 = Li[p + 3];
+        x[i0] -= Lx[p] * xj;
+        x[i1] -= Lx[p + 1] * xj;
+        x[i2] -= Lx[p + 2] * xj;
+        x[i3] -= Lx[p + 3] * xj;
+      }
+      for (; p < end; p++) x[Li[p]] -= Lx[p] * xj;
     }
 
     // pivot choice

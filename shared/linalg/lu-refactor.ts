@@ -34,7 +34,20 @@ export function luRefactor(f: LuFactors, a: CscMatrix, pivotTolerance = 1e-3, wo
       Ux[p] = ujk;
       x[j] = 0;
       if (ujk === 0) continue;
-      for (let q = Lp[j] + 1; q < Lp[j + 1]; q++) x[Li[q]] -= Lx[q] * ujk;
+      // unrolled by four: the scattered update is the whole cost of a refactorisation
+      let q = Lp[j] + 1;
+      const end = Lp[j + 1];
+      for (; q + 3 < end; q += 4) {
+        const i0 = Li[q];
+        const i1 = Li[q + 1];
+        const i2 = Li[q + 2];
+        const i3 = Li[q + 3];
+        x[i0] -= Lx[q] * ujk;
+        x[i1] -= Lx[q + 1] * ujk;
+        x[i2] -= Lx[q + 2] * ujk;
+        x[i3] -= Lx[q + 3] * ujk;
+      }
+      for (; q < end; q++) x[Li[q]] -= Lx[q] * ujk;
     }
     const pivot = x[k];
     x[k] = 0;
