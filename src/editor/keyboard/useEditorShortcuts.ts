@@ -22,6 +22,11 @@ function isTyping(target: EventTarget | null): boolean {
   return false;
 }
 
+function onCanvas(target: EventTarget | null): boolean {
+  const el = target as HTMLElement | null;
+  return !el || el === document.body || !!el.closest?.('.tl-canvas');
+}
+
 export interface ShortcutHandlers {
   onHelp(): void;
   onSave(): void;
@@ -69,6 +74,8 @@ export function useEditorShortcuts(editor: Editor, h: ShortcutHandlers): void {
       }
       // copy / cut / paste go through the clipboard events below
       if (command === 'copy' || command === 'cut' || command === 'paste') return;
+      // Tab keeps moving focus through the page unless the canvas (or nothing) has it
+      if (command === 'nextPart' && !onCanvas(e.target)) return;
       e.preventDefault();
       const a = editor.actions;
       switch (command) {

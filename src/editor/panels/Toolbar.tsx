@@ -111,7 +111,10 @@ export function Toolbar({ title, notice, status }: { title: string; notice?: str
           <summary className="flex h-7 cursor-pointer list-none items-center whitespace-nowrap rounded px-2 text-[12px] text-ink-muted hover:bg-sunken hover:text-ink" data-testid="examples-menu">
             Examples ▾
           </summary>
-          <ul className="absolute right-0 z-40 mt-1 w-72 rounded border border-rule bg-panel py-1 shadow-lg">
+          <ul
+            className="absolute right-0 z-40 mt-1 w-72 rounded border border-rule bg-panel py-1 shadow-lg"
+            onClick={(e) => e.currentTarget.closest('details')?.removeAttribute('open')}
+          >
             {examples.map((e) => (
               <li key={e.name}>
                 <Link to={`/sheets/${e.routeId}`} className="block px-3 py-1.5 text-[13px] hover:bg-sunken" title={e.description} data-testid={`example-${e.name}`}>
