@@ -8,3 +8,4 @@ export * from './protocol';
 export * from './transport';
 export * from './presence';
 export * from './client';
+export * from './replay-step';

@@ -7,7 +7,7 @@ import { createStore, type StoreApi } from 'zustand/vanilla';
 import { immer } from 'zustand/middleware/immer';
 import type { Sheet } from '../../../shared/sheet';
 import { initialSession, type DocumentState, type PresenceState, type SessionState } from '../model/scopes';
-import { UndoHistory } from './history';
+import { UndoHistory, type UndoEntry } from './history';
 import { ensureWireIds } from './normalize';
 
 enablePatches();
@@ -23,6 +23,12 @@ export interface PatchBatch {
 }
 
 export type DocRecipe = (draft: Draft<DocumentState>) => void;
+
+/**
+ * Turns an undo/redo step into patches for the document as it is now (others' edits may have
+ * moved or removed what the step touched since it was recorded); null: apply the recorded ones.
+ */
+export type HistoryResolver = (step: UndoEntry, direction: 'undo' | 'redo', doc: DocumentState) => Patch[] | null;
 
 export interface HistoryState {
   canUndo: boolean;
@@ -57,6 +63,8 @@ export interface EditorStore {
   subscribePatches(listener: (batch: PatchBatch) => void): () => void;
   undo(): boolean;
   redo(): boolean;
+  /** Installed by the co-editing layer (src/collab) while a sheet is edited live; null removes it. */
+  setHistoryResolver(resolver: HistoryResolver | null): void;
   /** Fold the following changes into one undo step (a drag, a slider pull) until `endGesture`. */
   beginGesture(label: string): void;
   endGesture(): void;
@@ -69,6 +77,7 @@ export interface EditorStore {
 export function createEditorStore(initial: Sheet): EditorStore {
   const history = new UndoHistory();
   const listeners = new Set<(b: PatchBatch) => void>();
+  let resolveStep: HistoryResolver | null = null;
   const store = createStore<EditorState>()(
     immer(() => ({
       doc: ensureWireIds(initial),
@@ -138,8 +147,10 @@ export function createEditorStore(initial: Sheet): EditorStore {
         store.setState((s) => void (s.history = historyState()));
         return false;
       }
-      commitDoc(applyPatches(store.getState().doc, entry.inversePatches));
-      emit({ origin: 'undo', label: entry.label, patches: entry.inversePatches, inversePatches: entry.patches });
+      const doc = store.getState().doc;
+      const patches = resolveStep?.(entry, 'undo', doc) ?? entry.inversePatches;
+      commitDoc(applyPatches(doc, patches));
+      emit({ origin: 'undo', label: entry.label, patches, inversePatches: entry.patches });
       return true;
     },
 
@@ -147,9 +158,15 @@ export function createEditorStore(initial: Sheet): EditorStore {
       if (store.getState().session.readOnly) return false;
       const entry = history.takeRedo();
       if (!entry) return false;
-      commitDoc(applyPatches(store.getState().doc, entry.patches));
-      emit({ origin: 'redo', label: entry.label, patches: entry.patches, inversePatches: entry.inversePatches });
+      const doc = store.getState().doc;
+      const patches = resolveStep?.(entry, 'redo', doc) ?? entry.patches;
+      commitDoc(applyPatches(doc, patches));
+      emit({ origin: 'redo', label: entry.label, patches, inversePatches: entry.inversePatches });
       return true;
+    },
+
+    setHistoryResolver(resolver) {
+      resolveStep = resolver;
     },
 
     beginGesture(label) {
