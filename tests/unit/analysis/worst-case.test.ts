@@ -53,3 +53,36 @@ describe('worst case of a divider', () => {
     expect(() => runWorstCase(divider(), { outputs: [{ kind: 'current', part: 'R1', pin: 'c' }] })).toThrow(/has no pin "c"; its pins are a, b/);
   });
 });
+
+describe('worst case over a temperature range', () => {
+  it('an NTC divider is bounded by the β equation at the range ends (Steinhart & Hart 1968 β form; references.md)', () => {
+    // 3.3 V over 10 kΩ (tempco 0 here) onto a 10 kΩ, B = 3950 K NTC; no part tolerances, −20 … 60 °C
+    const sheet = {
+      format: 'tapline.sheet',
+      version: 1,
+      conditions: { temperatureC: 25 },
+      parts: [
+        { id: 'V1', type: 'dc_voltage_source', params: { voltage: 3.3 } },
+        { id: 'R1', type: 'resistor', params: { resistance: 10000, tolerance: 0 } },
+        { id: 'TH1', type: 'ntc', params: { nominalResistance: 10000, beta: 3950, tolerance: 0 } },
+        { id: 'S', type: 'net_label', params: { name: 'sense' } },
+        { id: 'GND1', type: 'ground' },
+      ],
+      wires: [
+        { from: 'V1.pos', to: 'R1.a' },
+        { from: 'R1.b', to: 'TH1.a' },
+        { from: 'S.n', to: 'TH1.a' },
+        { from: 'TH1.b', to: 'GND1.g' },
+        { from: 'V1.neg', to: 'GND1.g' },
+      ],
+    };
+    const r = runWorstCase(sheet, { outputs: [{ kind: 'net', net: 'sense' }], extra: [{ target: { kind: 'condition', condition: 'temperatureC' }, low: -20, high: 60 }] });
+    expect(r.variables.map((v) => v.key)).toEqual(['conditions.temperatureC']);
+    const rNtc = (tC: number) => 10000 * Math.exp(3950 * (1 / (tC + 273.15) - 1 / 298.15));
+    const v = (tC: number) => (3.3 * rNtc(tC)) / (10000 + rNtc(tC));
+    expect(r.outputs[0].nominal).toBeCloseTo(1.65, 10);
+    expect(r.outputs[0].max.value).toBeCloseTo(v(-20), 9); // cold: NTC high, tap high
+    expect(r.outputs[0].min.value).toBeCloseTo(v(60), 9);
+    expect(r.outputs[0].max.sides['conditions.temperatureC']).toBe('low');
+  });
+});
