@@ -112,7 +112,8 @@ export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
     [editor, placeAt, tool],
   );
 
-  const onPaneMouseMove = useCallback(
+  // on the wrapper, not the pane: React Flow does not report pane moves while box selection is on
+  const onMouseMove = useCallback(
     (e: MouseEvent) => {
       if (tool.kind !== 'place') return;
       const p = rf.screenToFlowPosition({ x: e.clientX, y: e.clientY });
@@ -140,6 +141,8 @@ export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
           if (e.dataTransfer.types.includes(PART_DRAG_MIME)) e.preventDefault();
         }}
         onDrop={onDrop}
+        onMouseMove={onMouseMove}
+        onMouseLeave={() => setGhost(null)}
       >
         <ReactFlow<PartFlowNode, WireFlowEdge>
           nodes={nodes}
@@ -152,8 +155,6 @@ export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
           onNodeDragStart={(_e, _n, dragged) => editor.actions.beginDrag(dragged.length)}
           onNodeDragStop={() => editor.actions.endDrag()}
           onPaneClick={onPaneClick}
-          onPaneMouseMove={onPaneMouseMove}
-          onPaneMouseLeave={() => setGhost(null)}
           onMoveEnd={(_e, vp) => editor.updateSession((s) => void (s.viewport = { x: vp.x, y: vp.y, zoom: vp.zoom }))}
           isValidConnection={(c) => !(c.source === c.target && c.sourceHandle === c.targetHandle)}
           connectionMode={ConnectionMode.Loose}

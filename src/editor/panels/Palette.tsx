@@ -61,7 +61,7 @@ export function Palette() {
                     title={`${partSpecs[type].description}${key ? ` (key ${key})` : ''}`}
                     data-testid={`palette-${type}`}
                   >
-                    <span className={`flex h-7 w-10 shrink-0 items-center justify-center ${active ? '[&_.tl-symbol]:text-accent-ink' : ''}`}>
+                    <span className={`flex h-7 w-10 shrink-0 items-center justify-center ${active ? '[&_.sym-body]:fill-transparent! [&_.tl-symbol]:text-accent-ink' : ''}`}>
                       <PartSymbol type={type} style={style} scale={type === 'ground' ? 0.55 : 0.42} />
                     </span>
                     <span className="min-w-0 flex-1 truncate">{paletteLabel(type)}</span>

@@ -13,7 +13,7 @@ export function StatusBar() {
   const parts = useEditorState((s) => s.doc.parts.length);
   const openTab = useEditorUi((s) => s.openTab);
   const solve =
-    live.status === 'idle' ? 'Solving…' : live.status === 'error' ? 'Cannot solve' : `Solved · ${live.nets} nets${live.ms !== null ? ` · ${live.ms < 1 ? '<1' : Math.round(live.ms)} ms` : ''}`;
+    live.status === 'idle' ? (parts ? 'Solving…' : 'Nothing to solve yet') : live.status === 'error' ? 'Cannot solve' : `Solved · ${live.nets} nets${live.ms !== null ? ` · ${live.ms < 1 ? '<1' : Math.round(live.ms)} ms` : ''}`;
   return (
     <div className="flex h-7 shrink-0 items-center gap-3 border-t border-rule bg-panel px-3 text-[11px] text-ink-muted" data-testid="status-bar">
       <span className={live.status === 'error' ? 'font-medium text-danger' : ''} data-testid="solve-status" aria-live="polite">

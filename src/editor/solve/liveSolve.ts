@@ -45,6 +45,11 @@ export function startLiveSolve(editor: Editor, makeHandle: () => SolverHandle): 
     const key = electricalKey(input);
     if (key === lastKey) return;
     lastKey = key;
+    if (!input.parts.length) {
+      // nothing to solve is not an error: clear the readings and wait for the first part
+      store.setState({ ...emptySolveView, busy: false });
+      return;
+    }
     sent.set(solver.request(input), input);
   };
   const unsubscribe = editor.store.subscribe((s, prev) => {

@@ -71,6 +71,15 @@ describe('live solve', () => {
     live.dispose();
   });
 
+  it('treats an empty sheet as nothing to solve, not as an error', async () => {
+    const counter = { n: 0 };
+    const live = startLiveSolve(createEditor(emptySheet()), inProcess(counter));
+    await settle();
+    expect(live.store.getState().status).toBe('idle');
+    expect(counter.n).toBe(0);
+    live.dispose();
+  });
+
   it('reports a failed solve with the parts to look at', async () => {
     const ed = createEditor(emptySheet());
     ed.actions.place('resistor', { x: 0, y: 0 });
