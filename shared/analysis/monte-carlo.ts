@@ -8,7 +8,7 @@ import { controller, type RunControl } from './control';
 import { assertOutputs, evaluateOutputs, prepareCircuit, type PreparedCircuit } from './evaluate';
 import { outputKey, outputUnit, type OutputSpec } from './outputs';
 import { SampleStreams } from './prng';
-import { summarize, type OutputStatistics, type SpecWindow } from './statistics';
+import { summarize, wilsonInterval, type OutputStatistics, type SpecWindow, type YieldEstimate } from './statistics';
 import { isPrepared } from './sweep';
 import { AnalysisInputError, solveOptionsFor } from './targets';
 import { toleranceVariables, type ToleranceOptions, type ToleranceVariable } from './tolerance-space';
@@ -47,6 +47,8 @@ export interface MonteCarloResult {
   seed: number;
   variables: Array<ToleranceVariable & { distribution: Distribution }>;
   outputs: Array<{ key: string; unit: string; stats: OutputStatistics }>;
+  /** samples where every output with a spec window is inside it (failed samples fail), when any window is given */
+  combinedYield?: YieldEstimate;
   failed: number;
   /** the first few failures, to explain them */
   failures: Array<{ sample: number; message: string }>;
@@ -131,9 +133,28 @@ export function summarizeMonteCarlo(p: PreparedCircuit, o: MonteCarloOptions, ch
     const key = outputKey(spec);
     return { key, unit: outputUnit(spec), stats: summarize(all, { bins: o.histogramBins, window: o.windows?.[key] }) };
   });
+  const windowed = o.outputs.map((spec, k) => ({ k, w: o.windows?.[outputKey(spec)] })).filter((x) => x.w);
+  let combinedYield: YieldEstimate | undefined;
+  if (windowed.length) {
+    let pass = 0;
+    for (const c of sorted)
+      for (let i = 0; i < c.count; i++) {
+        let ok = true;
+        for (const { k, w } of windowed) {
+          const v = c.values[k][i];
+          if (!(Number.isFinite(v) && (w!.min === undefined || v >= w!.min) && (w!.max === undefined || v <= w!.max))) {
+            ok = false;
+            break;
+          }
+        }
+        if (ok) pass++;
+      }
+    combinedYield = { window: {}, pass, total: n, fraction: n ? pass / n : NaN, interval95: wilsonInterval(pass, n) };
+  }
   return {
     samples: n,
     seed: o.seed,
+    ...(combinedYield ? { combinedYield } : {}),
     variables: monteCarloVariables(p, o),
     outputs,
     failed: failures.length,

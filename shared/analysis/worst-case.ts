@@ -24,6 +24,8 @@ export interface WorstCaseOptions extends ToleranceOptions {
 
 export interface Contribution {
   key: string;
+  /** the part whose param this is (absent for a sheet condition) */
+  part?: string;
   unit: string;
   /** ∂output/∂variable at nominal (output unit per variable unit) */
   sensitivity: number;
@@ -110,7 +112,8 @@ export function runWorstCase(circuit: PreparedCircuit | unknown, o: WorstCaseOpt
       const s = sens.s[k][oi];
       const up = s * (vars[k].high - vars[k].nominal);
       const down = s * (vars[k].low - vars[k].nominal);
-      list.push({ key: vars[k].key, unit: vars[k].unit, sensitivity: s, towardMax: Math.max(up, down, 0), towardMin: Math.min(up, down, 0), share: 0 });
+      const part = vars[k].target.kind === 'param' ? (vars[k].target as { part: string }).part : undefined;
+      list.push({ key: vars[k].key, ...(part ? { part } : {}), unit: vars[k].unit, sensitivity: s, towardMax: Math.max(up, down, 0), towardMin: Math.min(up, down, 0), share: 0 });
       maxS[k] = !Number.isFinite(s) || s === 0 ? 0 : up >= down ? 1 : -1;
       minS[k] = -maxS[k];
     }

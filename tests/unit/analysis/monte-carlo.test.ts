@@ -89,3 +89,24 @@ describe('Monte Carlo of the 27 kΩ / 10 kΩ ±5 % divider', () => {
     expect(seen).toEqual([100, 200, 300]);
   });
 });
+
+describe('combined yield', () => {
+  it('counts samples where every windowed output is in spec', () => {
+    const o = {
+      outputs: [tap, { kind: 'current' as const, part: 'R1', pin: 'a' }],
+      samples: 2000,
+      seed: 5,
+      distribution: 'uniform' as const,
+      windows: { 'V(tap)': { min: 3.2 }, 'I(R1.a)': { max: 12 / 37000 } },
+    };
+    const r = runMonteCarlo(divider(), o);
+    const [a, b] = r.outputs.map((x) => x.stats.yield!.pass);
+    expect(r.combinedYield!.pass).toBeLessThanOrEqual(Math.min(a, b));
+    expect(r.combinedYield!.pass).toBeGreaterThanOrEqual(a + b - 2000);
+    // recount from the raw samples
+    const chunk = runMonteCarloChunk(prepareCircuit(divider()), o, 0, 2000);
+    let pass = 0;
+    for (let i = 0; i < 2000; i++) if (chunk.values[0][i] >= 3.2 && chunk.values[1][i] <= 12 / 37000) pass++;
+    expect(r.combinedYield!.pass).toBe(pass);
+  });
+});
