@@ -7,6 +7,7 @@ import type { LoadedSheet, SaveMeta, SaveResult, SheetSource } from '../editor/s
 import { ApiError } from '../lib/api';
 import { queryKeys } from '../lib/queryKeys';
 import { endpoints } from './endpoints';
+import { liveSaveFor } from '../collab/liveSessions';
 import { storeProject } from './projectQueries';
 import type { ProjectDetail } from './types';
 
@@ -33,6 +34,9 @@ export function createCloudSheetSource(projectId: string, qc: QueryClient): Shee
   // A viewer's copy has no save at all, so the editor shows it as a read-only source.
   let readOnly = false;
   const save = async (sheet: LoadedSheet['sheet'], meta: SaveMeta): Promise<SaveResult> => {
+    // Edited live (src/collab): every change already goes to the server as an operation.
+    const live = liveSaveFor(projectId);
+    if (live) return live();
     const observer = new MutationObserver<ProjectDetail, unknown, { baseVersion: number }>(qc, {
       mutationKey: ['projects', 'save', projectId],
       mutationFn: ({ baseVersion }) => endpoints.patchProject(projectId, { sheet, baseVersion }),

@@ -22,6 +22,8 @@ import { useEditorShortcuts } from './keyboard/useEditorShortcuts';
 import { useAutosave } from './useAutosave';
 import { useEditorUi } from './uiState';
 import { useNotices } from './notices';
+import { useCollaboration } from '../collab/useCollaboration';
+import { CollabOverlay } from '../collab/CollabOverlay';
 
 type LoadState =
   | { kind: 'loading' }
@@ -103,6 +105,8 @@ function EditorScreen({ editor, loaded, initialSource }: { editor: Editor; loade
     [navigate, initialSource.key],
   );
   const autosave = useAutosave(editor, getSource, version, onContinueAt);
+  // Live co-editing when the sheet is a cloud project (src/collab); a no-op for other sources.
+  const collab = useCollaboration(editor, initialSource.key);
   const ui = useEditorUi();
   const handlers = useMemo(
     () => ({
@@ -127,6 +131,7 @@ function EditorScreen({ editor, loaded, initialSource }: { editor: Editor; loade
           <div className="relative min-h-0 flex-1">
             <SchematicCanvas showReadings={ui.showReadings} />
             <CanvasBanner />
+            <CollabOverlay editor={editor} collab={collab} />
             <div className="pointer-events-none absolute inset-x-0 top-2 z-20 flex flex-col items-center gap-1" aria-live="polite">
               {notices.map((n) => (
                 <div key={n.id} className={`pointer-events-auto rounded border px-3 py-1 text-[12px] shadow-sm ${n.tone === 'error' ? 'border-danger/60 bg-panel text-danger' : 'border-rule bg-panel text-ink'}`}>
