@@ -167,6 +167,27 @@ describe('schematic editor', () => {
     expect(await page.locator('#param-R2-resistance').inputValue()).toBe('12k');
   });
 
+  it('selects a wire with a click and deletes it with the Delete key; undo brings it back', async () => {
+    await page.goto(`${server.baseUrl}/sheets/example-zener-reference`);
+    await page.getByTestId('sheet-editor').waitFor();
+    const edges = page.locator('.react-flow__edge');
+    await expect.poll(() => edges.count()).toBeGreaterThan(2);
+    const total = await edges.count();
+    // a straight run, so the middle of its box is on the wire
+    let target: { x: number; y: number } | null = null;
+    for (let i = 0; i < total && !target; i++) {
+      const b = await edges.nth(i).boundingBox();
+      if (b && (b.width < 16 || b.height < 16) && Math.max(b.width, b.height) > 30) target = { x: b.x + b.width / 2, y: b.y + b.height / 2 };
+    }
+    expect(target).not.toBeNull();
+    await page.mouse.click(target!.x, target!.y);
+    await expect.poll(() => page.getByTestId('status-bar').textContent()).toContain('1 wire selected');
+    await page.keyboard.press('Delete');
+    await expect.poll(() => edges.count()).toBe(total - 1);
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => edges.count()).toBe(total);
+  });
+
   it('opens the shortcut help with ? and closes it with Escape', async () => {
     await page.locator('body').click({ position: { x: 5, y: 300 } });
     await page.keyboard.press('Shift+?');
