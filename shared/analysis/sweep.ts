@@ -3,9 +3,9 @@
 // and forth (serpentine) so consecutive points are neighbours, while the table stays in
 // row-major order (outer index × inner count + inner index).
 import type { CircuitSolveOptions } from '../engine/compile';
-import type { SolveSuccess } from '../engine/result';
+import { partSpecs } from '../parts/specs';
 import { controller, type RunControl } from './control';
-import { prepareCircuit, solveOrThrow, type PreparedCircuit } from './evaluate';
+import { prepareCircuit, type PreparedCircuit } from './evaluate';
 import { stepValues, type StepSpec } from './steps';
 import { AnalysisInputError, resolveTarget, solveOptionsFor, type ParamTarget } from './targets';
 
@@ -49,8 +49,12 @@ export interface SweepTable {
 
 type Reader = () => number;
 
-/** One column per net voltage, pin current and part power of the nominal result, read from the engine's last solve. */
-function columnsFrom(p: PreparedCircuit, r: SolveSuccess, points: number): { names: string[]; units: string[]; readers: Reader[]; data: Float64Array[] } {
+/**
+ * One column per net voltage, pin current and part power (the keys of a full result), read from
+ * the engine's last solve. Built from the compiled circuit, so a sheet whose nominal point does
+ * not solve can still be swept.
+ */
+function columnsFor(p: PreparedCircuit, points: number): { names: string[]; units: string[]; readers: Reader[]; data: Float64Array[] } {
   const names: string[] = [];
   const units: string[] = [];
   const readers: Reader[] = [];
@@ -62,16 +66,17 @@ function columnsFrom(p: PreparedCircuit, r: SolveSuccess, points: number): { nam
       return NaN;
     }
   };
-  for (const net of Object.keys(r.nets)) {
+  for (const net of c.netNames) {
     names.push(`V(${net})`);
     units.push('V');
     readers.push(guard(() => c.netVoltage(net)));
   }
-  for (const [id, pr] of Object.entries(r.parts)) {
-    for (const pin of Object.keys(pr.pinCurrents)) {
-      names.push(`I(${id}.${pin})`);
+  for (const part of p.sheet.parts) {
+    const id = part.id;
+    for (const pin of partSpecs[part.type].pins) {
+      names.push(`I(${id}.${pin.name})`);
       units.push('A');
-      readers.push(guard(() => c.pinCurrent(id, pin)));
+      readers.push(guard(() => c.pinCurrent(id, pin.name)));
     }
     names.push(`P(${id})`);
     units.push('W');
@@ -82,7 +87,7 @@ function columnsFrom(p: PreparedCircuit, r: SolveSuccess, points: number): { nam
 
 /**
  * Run a sweep on a prepared circuit (or a sheet). Synchronous; cancellable through `control`.
- * @throws AnalysisInputError for a bad axis, CircuitFailureError when the nominal sheet cannot be solved
+ * @throws AnalysisInputError for a bad axis, CircuitFailureError for a sheet that cannot be compiled
  */
 export function runSweep(circuit: PreparedCircuit | unknown, spec: SweepSpec, control?: RunControl): SweepTable {
   const p = isPrepared(circuit) ? circuit : prepareCircuit(circuit);
@@ -102,9 +107,7 @@ export function runSweep(circuit: PreparedCircuit | unknown, spec: SweepSpec, co
   const points = nOuter * nInner;
   const targets = spec.axes.map((a) => a.target);
 
-  // a nominal solve fixes the columns (and is the first warm start)
-  const nominal = solveOrThrow(p, spec.base ?? {}, false);
-  const cols = columnsFrom(p, nominal, points);
+  const cols = columnsFor(p, points);
   const axisColumns = axisValues.map(() => new Float64Array(points));
   const ok = new Uint8Array(points);
   const iterations = new Int32Array(points);
