@@ -73,6 +73,33 @@ export interface EditorStore {
   updateSession(recipe: (draft: Draft<SessionState>) => void): void;
 }
 
+/** Apply patches, or null when they no longer fit the document (then the step is dropped). */
+function safeApply(doc: DocumentState, patches: Patch[]): DocumentState | null {
+  try {
+    return applyPatches(doc, patches);
+  } catch {
+    return null;
+  }
+}
+
+/** True when `patches` insert, remove or replace whole parts/wires other than appending at the end. */
+export function shiftsIndices(doc: DocumentState, patches: readonly Patch[]): boolean {
+  const length: Record<string, number> = { parts: doc.parts.length, wires: doc.wires.length };
+  for (const p of patches) {
+    if (p.path.length === 0) return true;
+    const [coll, index] = p.path;
+    if (coll !== 'parts' && coll !== 'wires') continue;
+    if (p.path.length === 1) return true;
+    if (p.path.length > 2) continue; // a field of one record
+    if (p.op === 'add' && index === length[coll]) {
+      length[coll] += 1;
+      continue;
+    }
+    return true;
+  }
+  return false;
+}
+
 /** Make a fresh editor store; the page makes one per open sheet, tests make one per test. */
 export function createEditorStore(initial: Sheet): EditorStore {
   const history = new UndoHistory();
@@ -129,6 +156,10 @@ export function createEditorStore(initial: Sheet): EditorStore {
 
     applyRemote(patches, label = 'Remote edit') {
       if (!patches.length) return;
+      // Local undo steps address parts and wires by array index. A remote change that moves
+      // those indices (anything but appending) would make them hit the wrong record, so the
+      // local history is dropped instead; field edits and appends keep it.
+      if (shiftsIndices(store.getState().doc, patches)) history.clear();
       // The inverse is not needed for undo (remote steps are not ours to undo) but listeners may log it.
       const [next, , inversePatches] = produceWithPatches(store.getState().doc, (d) => applyPatches(d, patches));
       commitDoc(next);

@@ -74,3 +74,23 @@ describe('patch batches', () => {
     expect(ed.getSession().selection.parts).toEqual([]);
   });
 });
+
+describe('undo after remote structural edits', () => {
+  it('keeps local undo across a remote append, drops it when a remote edit moves indices', () => {
+    const ed = createEditor(emptySheet());
+    ed.actions.place('resistor', { x: 0, y: 0 });
+    ed.actions.place('resistor', { x: 200, y: 0 });
+    ed.actions.setParam('R2', 'resistance', 4700);
+    const other = { id: 'R9', type: 'resistor', params: { resistance: 1000, tolerance: 0.01, powerRating: 0.25, tempco: 0 }, position: { x: 0, y: 200 } };
+    ed.applyRemote([{ op: 'add', path: ['parts', 2], value: other }]);
+    expect(ed.store.getState().history.canUndo).toBe(true);
+    ed.actions.undo();
+    expect((partOf(ed, 'R2').params as { resistance: number }).resistance).toBe(10_000);
+    // a colleague deletes R1: R2 moves to index 0, so index-addressed steps would hit the wrong part
+    ed.actions.setParam('R2', 'resistance', 2200);
+    ed.applyRemote([{ op: 'remove', path: ['parts', 0] }]);
+    expect(ed.store.getState().history.canUndo).toBe(false);
+    expect(ed.actions.undo()).toBe(false);
+    expect((partOf(ed, 'R2').params as { resistance: number }).resistance).toBe(2200);
+  });
+});
