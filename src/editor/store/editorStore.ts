@@ -156,10 +156,11 @@ export function createEditorStore(initial: Sheet): EditorStore {
 
     applyRemote(patches, label = 'Remote edit') {
       if (!patches.length) return;
-      // Local undo steps address parts and wires by array index. A remote change that moves
-      // those indices (anything but appending) would make them hit the wrong record, so the
-      // local history is dropped instead; field edits and appends keep it.
-      if (shiftsIndices(store.getState().doc, patches)) history.clear();
+      // Without a history resolver, undo steps are raw patches that address parts and wires by
+      // array index. A remote change that moves those indices (anything but appending) would make
+      // them hit the wrong record, so the local history is dropped instead; field edits and
+      // appends keep it. With a resolver (the co-editing binding) steps are re-derived by id.
+      if (!resolveStep && shiftsIndices(store.getState().doc, patches)) history.clear();
       // The inverse is not needed for undo (remote steps are not ours to undo) but listeners may log it.
       const [next, , inversePatches] = produceWithPatches(store.getState().doc, (d) => applyPatches(d, patches));
       commitDoc(next);
@@ -180,7 +181,14 @@ export function createEditorStore(initial: Sheet): EditorStore {
       }
       const doc = store.getState().doc;
       const patches = resolveStep?.(entry, 'undo', doc) ?? entry.inversePatches;
-      commitDoc(applyPatches(doc, patches));
+      const next = safeApply(doc, patches);
+      if (!next) {
+        // the step no longer fits the document: drop the history rather than corrupt the sheet
+        history.clear();
+        store.setState((s) => void (s.history = historyState()));
+        return false;
+      }
+      commitDoc(next);
       emit({ origin: 'undo', label: entry.label, patches, inversePatches: entry.patches });
       return true;
     },
@@ -191,7 +199,14 @@ export function createEditorStore(initial: Sheet): EditorStore {
       if (!entry) return false;
       const doc = store.getState().doc;
       const patches = resolveStep?.(entry, 'redo', doc) ?? entry.patches;
-      commitDoc(applyPatches(doc, patches));
+      const next = safeApply(doc, patches);
+      if (!next) {
+        // the step no longer fits the document: drop the history rather than corrupt the sheet
+        history.clear();
+        store.setState((s) => void (s.history = historyState()));
+        return false;
+      }
+      commitDoc(next);
       emit({ origin: 'redo', label: entry.label, patches, inversePatches: entry.inversePatches });
       return true;
     },
