@@ -23,35 +23,45 @@ export function cscFromTriplets(
 ): CscMatrix {
   const nz = ti.length;
   if (tj.length !== nz || tv.length !== nz) throw new Error('cscFromTriplets: row, column and value arrays differ in length');
-  const count = new Int32Array(cols + 1);
+  // bucket by row first, then by column: each column then holds its rows in ascending order
+  // without a comparison sort (two counting passes, O(rows + cols + entries))
+  const rowStart = new Int32Array(rows + 1);
   for (let k = 0; k < nz; k++) {
     const i = ti[k];
     const j = tj[k];
     if (!(i >= 0 && i < rows && j >= 0 && j < cols)) throw new Error(`cscFromTriplets: entry ${k} at (${i}, ${j}) is outside a ${rows}×${cols} matrix`);
-    count[j + 1]++;
+    rowStart[i + 1]++;
   }
-  for (let j = 0; j < cols; j++) count[j + 1] += count[j];
-  const fillPos = count.slice(0, cols);
+  for (let i = 0; i < rows; i++) rowStart[i + 1] += rowStart[i];
+  const rowFill = rowStart.slice(0, rows);
+  const byRowCol = new Int32Array(nz);
+  const byRowVal = new Float64Array(nz);
+  const colCount = new Int32Array(cols + 1);
+  for (let k = 0; k < nz; k++) {
+    const p = rowFill[ti[k]]++;
+    byRowCol[p] = tj[k];
+    byRowVal[p] = tv[k];
+    colCount[tj[k] + 1]++;
+  }
+  for (let j = 0; j < cols; j++) colCount[j + 1] += colCount[j];
+  const colFill = colCount.slice(0, cols);
   const ri = new Int32Array(nz);
   const rv = new Float64Array(nz);
-  for (let k = 0; k < nz; k++) {
-    const p = fillPos[tj[k]]++;
-    ri[p] = ti[k];
-    rv[p] = tv[k];
-  }
-  // sort each column by row and merge duplicates
+  for (let i = 0; i < rows; i++)
+    for (let p = rowStart[i]; p < rowStart[i + 1]; p++) {
+      const q = colFill[byRowCol[p]]++;
+      ri[q] = i;
+      rv[q] = byRowVal[p];
+    }
+  // merge duplicates (adjacent now)
   const colPtr = new Int32Array(cols + 1);
   const rowIdx = new Int32Array(nz);
   const values = new Float64Array(nz);
-  const order: number[] = [];
   let out = 0;
   for (let j = 0; j < cols; j++) {
     colPtr[j] = out;
-    order.length = 0;
-    for (let p = count[j]; p < count[j + 1]; p++) order.push(p);
-    order.sort((a, b) => ri[a] - ri[b]);
     let last = -1;
-    for (const p of order) {
+    for (let p = colCount[j]; p < colCount[j + 1]; p++) {
       if (ri[p] === last) values[out - 1] += rv[p];
       else {
         rowIdx[out] = ri[p];
@@ -62,7 +72,7 @@ export function cscFromTriplets(
     }
   }
   colPtr[cols] = out;
-  return { rows, cols, colPtr, rowIdx: rowIdx.slice(0, out), values: values.slice(0, out) };
+  return { rows, cols, colPtr, rowIdx: out === nz ? rowIdx : rowIdx.slice(0, out), values: out === nz ? values : values.slice(0, out) };
 }
 
 /** y = A·x. */

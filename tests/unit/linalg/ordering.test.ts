@@ -70,3 +70,14 @@ describe('SparsePatternBuilder', () => {
     expect(() => b.slot(3, 0)).toThrow(/outside the 3×3/);
   });
 });
+
+describe('cscFromTriplets', () => {
+  it('sums duplicate stamps and sorts rows within columns (as MNA assembly needs)', () => {
+    // two conductance stamps of 1 S and 2 S between nodes 0 and 1, plus a stamp on node 2
+    const a = cscFromTriplets(3, 3, [1, 0, 0, 1, 0, 1, 1, 0, 2], [1, 0, 1, 0, 0, 1, 0, 1, 2], [1, 1, -1, -1, 2, 2, -2, -2, 5]);
+    expect(Array.from(a.colPtr)).toEqual([0, 2, 4, 5]);
+    expect(Array.from(a.rowIdx)).toEqual([0, 1, 0, 1, 2]);
+    expect(Array.from(a.values)).toEqual([3, -3, -3, 3, 5]);
+    expect(() => cscFromTriplets(2, 2, [2], [0], [1])).toThrow(/outside a 2×2/);
+  });
+});
