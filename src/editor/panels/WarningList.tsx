@@ -17,7 +17,8 @@ export function WarningList({ warnings, compact = false }: { warnings: SolveWarn
         const body = (
           <>
             <span className={`mr-1.5 text-[10px] font-bold uppercase tracking-wider ${TONE[rank]}`}>{WORD[rank]}</span>
-            {!compact && w.partId && <span className="num mr-1.5 font-semibold">{w.partId}</span>}
+            {/* name the part unless the message already starts with it */}
+            {!compact && w.partId && !w.message.startsWith(w.partId) && <span className="num mr-1.5 font-semibold">{w.partId}</span>}
             {!compact && !w.partId && w.net && <span className="num mr-1.5 font-semibold">net {w.net}</span>}
             <span>{w.message}</span>
           </>
