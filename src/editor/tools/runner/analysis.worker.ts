@@ -33,7 +33,23 @@ function outcome<T>(run: () => T): JobOutcome<T> {
   }
 }
 
-const progress = (fn?: ProgressFn) => (fn ? { onProgress: (done: number, total: number) => void fn(done, total), checkEvery: 16 } : undefined);
+/**
+ * Progress back to the page at most every 100 ms (and at the end): every message costs the page a
+ * render, and a fast run could otherwise send tens of thousands.
+ */
+function progress(fn?: ProgressFn) {
+  if (!fn) return undefined;
+  let last = 0;
+  return {
+    checkEvery: 64,
+    onProgress: (done: number, total: number) => {
+      const now = performance.now();
+      if (done < total && now - last < 100) return;
+      last = now;
+      void fn(done, total);
+    },
+  };
+}
 
 const api = {
   sweep(sheet: Sheet, spec: SweepSpec, onProgress?: ProgressFn): JobOutcome<SweepTable> {

@@ -72,7 +72,7 @@ export function TolerancePanel() {
         )}
         <div className="mt-2 grid grid-cols-3 gap-2">
           <Field label="Samples">
-            <input className={inputClass} type="number" min={10} max={200000} step={100} value={form.samples} onChange={(e) => set({ samples: Number(e.target.value) })} data-testid="mc-samples" />
+            <input className={inputClass} type="number" min={10} max={2000000} step={100} value={form.samples} onChange={(e) => set({ samples: Number(e.target.value) })} data-testid="mc-samples" />
           </Field>
           <Field label="Seed">
             <input className={inputClass} type="number" value={form.seed} onChange={(e) => set({ seed: Number(e.target.value) })} />

@@ -15,7 +15,7 @@ const unitOf = (o: OutputSpec) => (o.kind === 'net' ? 'V' : o.kind === 'current'
 /** Options for both runs, or what to fix in the form. */
 export function toleranceRequest(f: ToleranceForm): ToleranceRequest {
   if (!f.outputs.length) return { ok: false, message: 'Choose at least one output.' };
-  if (!(Number.isInteger(f.samples) && f.samples >= 10 && f.samples <= 200_000)) return { ok: false, message: 'Samples: use a whole number from 10 to 200,000.' };
+  if (!(Number.isInteger(f.samples) && f.samples >= 10 && f.samples <= 2_000_000)) return { ok: false, message: 'Samples: use a whole number from 10 to 2,000,000.' };
   if (!Number.isInteger(f.seed)) return { ok: false, message: 'Seed: use a whole number (the same seed repeats the same run).' };
   const outputs: OutputSpec[] = [];
   const windows: Record<string, SpecWindow> = {};
