@@ -40,6 +40,8 @@ export interface SparseSolverStats {
 export class SparseLuSolver {
   private order: Int32Array;
   private deferralTried = false;
+  /** once the diagonal pivots have failed on this pattern, go straight to the pivot search */
+  private staticFailed = false;
   private factors: LuFactors | null = null;
   private readonly work: Float64Array;
   private readonly pivotTolerance: number;
@@ -67,7 +69,7 @@ export class SparseLuSolver {
     }
     this.factors = null;
     this.full++;
-    if (this.staticPivotFirst) {
+    if (this.staticPivotFirst && !this.staticFailed) {
       // first time: move zero-diagonal (source-branch) variables behind a neighbour before trying
       if (!this.deferralTried) {
         this.deferralTried = true;
@@ -75,6 +77,7 @@ export class SparseLuSolver {
         if (alt) this.order = alt;
       }
       if (this.tryStatic(this.order)) return;
+      this.staticFailed = true;
     }
     this.factors = luFactor(this.pattern, this.order, this.pivotTolerance);
     this.staticPivots = false;
