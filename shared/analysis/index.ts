@@ -14,3 +14,5 @@ export * from './targets';
 export * from './thevenin';
 export * from './tolerance-space';
 export * from './worst-case';
+export * from './worst-case-first-order';
+export * from './corner-search';
