@@ -7,6 +7,8 @@ import { prepareCircuit, type PreparedCircuit } from './evaluate';
 import { chunkRanges, runMonteCarloChunk, summarizeMonteCarlo, type MonteCarloChunk, type MonteCarloOptions, type MonteCarloResult } from './monte-carlo';
 import { runSweep, type SweepSpec, type SweepTable } from './sweep';
 import { runWorstCase, type WorstCaseOptions, type WorstCaseResult } from './worst-case';
+import { theveninAt, type TheveninResult } from './thevenin';
+import type { CircuitSolveOptions } from '../engine/compile';
 
 let cached: { text: string; prepared: PreparedCircuit } | null = null;
 
@@ -45,4 +47,9 @@ export function runSweepJob(job: { sheet: unknown; spec: SweepSpec }, control?: 
 
 export function runWorstCaseJob(job: { sheet: unknown; options: WorstCaseOptions }): WorstCaseResult {
   return runWorstCase(prepared(job.sheet), job.options);
+}
+
+export function runTheveninJob(job: { sheet: unknown; nets: readonly string[]; base?: CircuitSolveOptions }): TheveninResult[] {
+  const p = prepared(job.sheet);
+  return job.nets.map((net) => theveninAt(p.sheet, net, job.base ?? {}));
 }

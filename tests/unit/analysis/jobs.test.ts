@@ -23,3 +23,12 @@ describe('worker jobs', () => {
     expect(t.errors).toEqual([]);
   });
 });
+
+describe('thevenin job', () => {
+  it('answers for several nets of one sheet', async () => {
+    const { runTheveninJob } = await import('../../../shared/analysis');
+    const { divider } = await import('./fixtures');
+    const [t] = runTheveninJob(structuredClone({ sheet: divider(), nets: ['tap'] }));
+    expect(t.resistance).toBeCloseTo(270000 / 37, 6);
+  });
+});
