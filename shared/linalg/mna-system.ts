@@ -6,8 +6,8 @@ import { cscFromTriplets, type CscMatrix } from './csc';
 import { SingularMatrixError } from './lu-factor';
 import { SparseLuSolver } from './sparse-solver';
 
-/** Systems up to 2048 unknowns index entries through a flat table (16 MiB at most). */
-const TABLE_LIMIT = 2048 * 2048;
+/** Systems up to 1024 unknowns index entries through a flat table (4 MiB at most). */
+const TABLE_LIMIT = 1024 * 1024;
 
 /** The CSC pattern of the recorded positions plus every diagonal (duplicates merged). */
 function patternMatrix(size: number, pattern: ReadonlyArray<readonly [number, number]>): CscMatrix {
