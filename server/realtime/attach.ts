@@ -13,6 +13,7 @@ import { registerHandlers } from './handlers';
 import { actOnNotice, recheckAll } from './notice-actions';
 import { listenForNotices } from './notifications';
 import { ProjectQueues } from './project-queues';
+import { Timings } from './timings';
 import { roomOf, type RealtimeIo } from './types';
 
 export interface RealtimeDeps {
@@ -52,16 +53,22 @@ export function attachRealtime(server: http.Server, deps: RealtimeDeps): Realtim
       : {}),
   });
 
-  const queues = new ProjectQueues(database.pool, (projectId, accepted) => {
-    for (const { batch, version } of accepted) {
-      const message: OpBroadcast = { projectId, version, ops: batch.request.ops, author: batch.author, batchId: batch.request.batchId };
-      io.to(roomOf(projectId)).except(batch.socketId).emit(EVENTS.op, message);
-    }
-  });
+  // Benchmark-only switch (bench/realtime.bench.ts): answer `debug:timings` with server-side latencies.
+  const timings = process.env.TAPLINE_REALTIME_TIMINGS === '1' ? new Timings() : null;
+  const queues = new ProjectQueues(
+    database.pool,
+    (projectId, accepted) => {
+      for (const { batch, version } of accepted) {
+        const message: OpBroadcast = { projectId, version, ops: batch.request.ops, author: batch.author, batchId: batch.request.batchId };
+        io.to(roomOf(projectId)).except(batch.socketId).emit(EVENTS.op, message);
+      }
+    },
+    timings ? (ms) => timings.commit(ms) : undefined,
+  );
 
   useSessionsAtHandshake(io, deps.sessionHandlers);
   authenticateSockets(io);
-  io.on('connection', (socket) => registerHandlers(io, socket, { pool: database.pool, queues }));
+  io.on('connection', (socket) => registerHandlers(io, socket, { pool: database.pool, queues, timings }));
 
   const notices = listenForNotices(
     config.DATABASE_URL,

@@ -13,6 +13,7 @@ import {
 } from '../../shared/sync/protocol';
 import { readForJoin, readRole } from './join-read';
 import type { ProjectQueues } from './project-queues';
+import type { Timings } from './timings';
 import { roomOf, type RealtimeIo, type RealtimeSocket } from './types';
 
 const notFound = { code: 'not_found', message: 'No such project, or it is not shared with you. Check the link, or ask its owner to invite you.' } as const;
@@ -51,7 +52,7 @@ export function announceLeave(io: RealtimeIo, socket: RealtimeSocket, projectId:
   io.to(roomOf(projectId)).except(socket.id).emit(EVENTS.presenceLeave, { projectId, clientId: socket.id });
 }
 
-export function registerHandlers(io: RealtimeIo, socket: RealtimeSocket, deps: { pool: pg.Pool; queues: ProjectQueues }): void {
+export function registerHandlers(io: RealtimeIo, socket: RealtimeSocket, deps: { pool: pg.Pool; queues: ProjectQueues; timings: Timings | null }): void {
   socket.on(EVENTS.join, async (raw, ack) => {
     const reply = answer<JoinAck>(ack);
     const parsed = JoinRequestSchema.safeParse(raw);
@@ -91,6 +92,7 @@ export function registerHandlers(io: RealtimeIo, socket: RealtimeSocket, deps: {
   });
 
   socket.on(EVENTS.op, async (raw, ack) => {
+    const done = deps.timings?.start();
     const reply = answer<OpAck>(ack);
     const parsed = OpRequestSchema.safeParse(raw);
     if (!parsed.success) return reply({ ok: false, error: { code: 'invalid_request', message: describeInvalid(parsed.error) } });
@@ -98,6 +100,7 @@ export function registerHandlers(io: RealtimeIo, socket: RealtimeSocket, deps: {
     if (!socket.data.projects[request.projectId]) return reply({ ok: false, error: notJoined });
     // The role is checked again inside the commit, against the membership row, on every batch.
     const outcome = await deps.queues.submit(request.projectId, { request, author: socket.data.user, sessionId: socket.data.sessionId, socketId: socket.id });
+    done?.();
     if (!outcome.ok && outcome.error.code === 'not_found') {
       delete socket.data.projects[request.projectId];
       await socket.leave(roomOf(request.projectId));
@@ -117,6 +120,11 @@ export function registerHandlers(io: RealtimeIo, socket: RealtimeSocket, deps: {
     // volatile: under back-pressure a cursor position is dropped rather than queued.
     socket.to(roomOf(projectId)).volatile.emit(EVENTS.presence, { projectId, peer: peerOf(socket, projectId)! });
   });
+
+  if (deps.timings) {
+    const timings = deps.timings;
+    socket.on('debug:timings', (ack) => typeof ack === 'function' && ack(timings.take()));
+  }
 
   socket.on('disconnecting', () => {
     for (const projectId of Object.keys(socket.data.projects ?? {})) announceLeave(io, socket, projectId);

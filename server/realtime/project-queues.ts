@@ -2,6 +2,7 @@
 // (the row lock orders them across processes; the queue keeps this process from piling up
 // connections waiting on that lock), and whatever arrived while a transaction was running goes
 // into the next one: under load one commit carries many batches.
+import { performance } from 'node:perf_hooks';
 import type pg from 'pg';
 import { commitGroup, type CachedDoc } from './commit';
 import type { BatchOutcome, QueuedBatch } from './decide';
@@ -33,6 +34,8 @@ export class ProjectQueues {
     private readonly pool: pg.Pool,
     /** called after COMMIT with the accepted batches, before their authors get their answers */
     private readonly onAccepted: AcceptedListener,
+    /** told how long each transaction took, ms (benchmark timings) */
+    private readonly onCommitTime?: (ms: number) => void,
   ) {
     this.sweeper = setInterval(() => this.sweep(), 60_000);
     this.sweeper.unref();
@@ -82,7 +85,9 @@ export class ProjectQueues {
     try {
       while (ch.queue.length) {
         const group = ch.queue.splice(0, MAX_GROUP);
+        const t0 = performance.now();
         const result = await commitGroup(this.pool, projectId, ch.cache, group.map((w) => w.batch));
+        this.onCommitTime?.(performance.now() - t0);
         ch.cache = result.cache;
         if (result.accepted.length) this.onAccepted(projectId, result.accepted);
         group.forEach((w, i) => w.resolve(result.outcomes[i]));

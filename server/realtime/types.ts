@@ -1,5 +1,6 @@
 // socket.io typed for the co-editing protocol (shared/sync/protocol.ts).
 import type { Server, Socket } from 'socket.io';
+import type { TimingSummary } from './timings';
 import type {
   JoinAck,
   OpAck,
@@ -20,6 +21,8 @@ export interface ClientToServerEvents {
   'sheet:leave': (request: unknown) => void;
   'sheet:op': (request: unknown, ack: (answer: OpAck) => void) => void;
   'presence:update': (request: unknown) => void;
+  /** benchmark only (TAPLINE_REALTIME_TIMINGS=1): server-side timings since the last call */
+  'debug:timings': (ack: (summary: TimingSummary) => void) => void;
 }
 
 export interface ServerToClientEvents {

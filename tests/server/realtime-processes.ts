@@ -31,11 +31,13 @@ export interface ServerProcess {
 }
 
 /** Start `server/main.ts` and wait until /api/health answers. */
-export async function startServerProcess(databaseUrl: string, port?: number): Promise<ServerProcess> {
+export async function startServerProcess(databaseUrl: string, port?: number, env: Record<string, string> = {}): Promise<ServerProcess> {
   const p = port ?? (await freePort());
   // `node --import tsx` rather than the tsx CLI: the CLI runs the program in a grandchild process,
   // which a SIGKILL of the child would leave running.
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
+  // TAPLINE_SERVER_NODE_ARGS: extra node flags for profiling, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof".
+  const extra = (process.env.TAPLINE_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const child = spawn(process.execPath, [...extra, '--import', 'tsx', 'server/main.ts'], {
     cwd: root,
     env: {
       ...process.env,
@@ -45,6 +47,7 @@ export async function startServerProcess(databaseUrl: string, port?: number): Pr
       NODE_ENV: 'test',
       RATE_LIMIT_SIGNIN: '10000',
       TAPLINE_STATIC_DIR: path.join(root, '.local', 'no-client'),
+      ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
