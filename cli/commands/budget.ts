@@ -26,6 +26,7 @@ export const budgetCommand: CliCommand = {
         const rows: Array<Array<string | number | null>> = [['part', 'type', 'quantity', 'value', 'rating', 'derated rating', 'ambient (C)', 'utilisation', 'status']];
         for (const s of b.stress) rows.push([s.part, s.type, s.quantity, s.value, s.rating, s.deratedRating, s.ambientC, s.utilisation, s.status]);
         for (const s of b.supplies) rows.push([s.part, s.type, 'supply current (A) / power (W)', s.current, null, null, null, s.power, '']);
+        for (const br of b.branches) rows.push([br.part, br.type, 'branch current (A) / power (W)', br.current, null, null, null, br.power, '']);
         emitText(io, toCsv(rows));
         return;
       }

@@ -17,6 +17,8 @@ export interface DeratingCurve {
   zeroRatingAtC: number;
 }
 
+const TWO_TERMINAL = new Set(['resistor', 'ntc', 'ldr', 'load', 'diode', 'zener', 'led']);
+
 export const RESISTOR_DERATING: DeratingCurve = { fullRatingUpToC: 70, zeroRatingAtC: 155 };
 
 /** Fraction (0..1) of the rating allowed at ambient `tC`. */
@@ -51,6 +53,16 @@ export interface StressEntry {
   status: 'ok' | 'caution' | 'over';
 }
 
+/** Current through a two-terminal part (its share of the quiescent budget). */
+export interface BranchEntry {
+  part: string;
+  type: string;
+  /** |current| through the part, A */
+  current: number;
+  /** power absorbed, W */
+  power: number;
+}
+
 export interface BudgetOptions {
   /** part id of the load (for the efficiency) */
   load?: string;
@@ -66,6 +78,8 @@ export interface BudgetResult {
   /** Σ power delivered by all sources, W */
   totalSupplyPower: number;
   stress: StressEntry[];
+  /** every resistor, thermistor, LDR, load, diode, Zener and LED with its current, largest first */
+  branches: BranchEntry[];
   efficiency?: { load: string; loadPower: number; sourcePower: number; efficiency: number };
 }
 
@@ -73,6 +87,7 @@ export interface BudgetResult {
 export function powerBudget(sheet: Sheet, r: SolveSuccess, o: BudgetOptions = {}): BudgetResult {
   const supplies: SupplyEntry[] = [];
   const stress: StressEntry[] = [];
+  const branches: BranchEntry[] = [];
   const ambientOf = (params: Record<string, unknown>) => (typeof params.temperatureC === 'number' ? params.temperatureC : r.conditions.temperatureC);
   const push = (part: string, type: string, quantity: 'power' | 'current', value: number, rating: number, ambientC: number, factor: number) => {
     const derated = rating * factor;
@@ -84,6 +99,10 @@ export function powerBudget(sheet: Sheet, r: SolveSuccess, o: BudgetOptions = {}
     if (!res) continue;
     const params = part.params as Record<string, unknown>;
     const amb = ambientOf(params);
+    if (TWO_TERMINAL.has(part.type)) {
+      const first = Object.values(res.pinCurrents)[0] ?? 0;
+      branches.push({ part: part.id, type: part.type, current: Math.abs(first), power: res.power });
+    }
     switch (part.type) {
       case 'dc_voltage_source':
       case 'dc_current_source':
@@ -106,7 +125,8 @@ export function powerBudget(sheet: Sheet, r: SolveSuccess, o: BudgetOptions = {}
   }
   const totalSupplyCurrent = supplies.filter((s) => s.type === 'dc_voltage_source').reduce((a, s) => a + s.current, 0);
   const totalSupplyPower = supplies.reduce((a, s) => a + s.power, 0);
-  const out: BudgetResult = { supplies, totalSupplyCurrent, totalSupplyPower, stress };
+  branches.sort((a, b) => b.current - a.current || a.part.localeCompare(b.part));
+  const out: BudgetResult = { supplies, totalSupplyCurrent, totalSupplyPower, stress, branches };
   if (o.load) {
     const lr = r.parts[o.load];
     if (!lr) throw new AnalysisInputError(`There is no part "${o.load}" to treat as the load.`);

@@ -79,6 +79,10 @@ describe('budgets', () => {
     expect(r1.value).toBeCloseTo((12 - vtap) ** 2 / 27000, 12);
     expect(r1.rating).toBe(0.25);
     expect(r1.status).toBe('ok');
+    // the branches: R1 carries the whole supply current, then R2 and the load share it
+    expect(b.branches[0]).toMatchObject({ part: 'R1' });
+    expect(b.branches[0].current).toBeCloseTo(i, 14);
+    expect(b.branches.find((x) => x.part === 'RL1')!.current).toBeCloseTo(vtap / 4700, 14);
   });
 
   it('derates a resistor at a hot ambient', () => {
