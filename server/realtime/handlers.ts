@@ -14,6 +14,7 @@ import {
 import { readForJoin, readRole } from './join-read';
 import type { ProjectQueues } from './project-queues';
 import type { Timings } from './timings';
+import { TokenBucket } from './rate-limit';
 import { roomOf, type RealtimeIo, type RealtimeSocket } from './types';
 
 const notFound = { code: 'not_found', message: 'No such project, or it is not shared with you. Check the link, or ask its owner to invite you.' } as const;
@@ -91,9 +92,12 @@ export function registerHandlers(io: RealtimeIo, socket: RealtimeSocket, deps: {
     announceLeave(io, socket, projectId);
   });
 
+  const bucket = new TokenBucket();
   socket.on(EVENTS.op, async (raw, ack) => {
     const done = deps.timings?.start();
     const reply = answer<OpAck>(ack);
+    // 'unavailable' makes the client keep the batch and send it again a moment later.
+    if (!bucket.take()) return reply({ ok: false, error: { code: 'unavailable', message: 'Too many changes at once; they are sent again in a moment.' } });
     const parsed = OpRequestSchema.safeParse(raw);
     if (!parsed.success) return reply({ ok: false, error: { code: 'invalid_request', message: describeInvalid(parsed.error) } });
     const request = parsed.data;

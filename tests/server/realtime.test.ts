@@ -129,6 +129,20 @@ describe('operations', () => {
     a.stop();
   });
 
+  it('limits how fast one socket may send: the excess is answered unavailable (the client sends it again later)', async () => {
+    const projectId = await createSharedProject(live, ada, sheet(), []);
+    const a = await openSheet(live.url, ada, projectId);
+    const answers = await Promise.all(
+      Array.from({ length: 360 }, (_, k) =>
+        a.transport.sendOps({ projectId, baseVersion: 1, batchId: `flood-batch-${k}`, ops: [{ op: 'set', target: 'sheet', path: ['title'], value: `t${k}` }] }),
+      ),
+    );
+    const unavailable = answers.filter((x) => !x.ok && x.error.code === 'unavailable').length;
+    expect(unavailable).toBeGreaterThan(20);
+    expect(answers.filter((x) => x.ok).length).toBe(360 - unavailable);
+    a.stop();
+  });
+
   it('commits a batch sent twice (a reconnect) once', async () => {
     const projectId = await createSharedProject(live, ada, sheet(), []);
     const a = await openSheet(live.url, ada, projectId);
