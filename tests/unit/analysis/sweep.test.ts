@@ -101,3 +101,17 @@ describe('sweep over a declared supply range', () => {
     expect(() => runSweep(divider(), { axes: [{ target: { kind: 'param', part: 'V1', param: 'voltage' }, steps: { overRange: true, points: 3 } }] })).toThrow(/no declared range/);
   });
 });
+
+describe('sweep cancellation', () => {
+  it('stops at the next check after shouldStop turns true, keeping what it solved', () => {
+    let calls = 0;
+    const t = runSweep(divider(), { axes: [{ target: { kind: 'param', part: 'R2', param: 'resistance' }, steps: { from: 1000, to: 2000, points: 1000 } }] }, {
+      checkEvery: 50,
+      shouldStop: () => ++calls >= 3,
+    });
+    expect(t.stopped).toBe(true);
+    expect(t.completed).toBe(150);
+    expect(t.ok[149]).toBe(1);
+    expect(t.ok[150]).toBe(0);
+  });
+});
