@@ -3,6 +3,7 @@
 // driven by playwright-core. Build the client first (`npx vite build`; `npm test` does it).
 import fs from 'node:fs';
 import http from 'node:http';
+import os from 'node:os';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { chromium, type Browser, type Page } from 'playwright-core';
@@ -39,10 +40,13 @@ export async function startBrowserServer(env: Record<string, string> = {}): Prom
   if (!fs.existsSync(path.join(distDir, 'index.html'))) {
     throw new Error('dist/index.html is missing: build the client with `npx vite build` before the browser tests (npm test does this).');
   }
+  // A private copy of the build: in a shared checkout someone may rebuild dist/ mid-test.
+  const clientDir = fs.mkdtempSync(path.join(os.tmpdir(), 'tapline-dist-'));
+  fs.cpSync(distDir, clientDir, { recursive: true, filter: (src) => !src.endsWith('.map') });
   const t = await createTestDatabase();
   const config = loadConfig({ DATABASE_URL: t.url, NODE_ENV: 'test', RATE_LIMIT_SIGNIN: '1000', RATE_LIMIT_INVITATIONS: '1000', ...env });
   const mail = await startMail(config, t.database);
-  const app = createApp({ config, database: t.database, mail, staticDir: distDir });
+  const app = createApp({ config, database: t.database, mail, staticDir: clientDir });
   const server = http.createServer(app);
   // One process, so socket.io rooms need not go through PostgreSQL.
   const realtime = attachRealtime(server, { config, database: t.database, sessionHandlers: sessionHandlersOf(app), clustered: false });
@@ -58,6 +62,7 @@ export async function startBrowserServer(env: Record<string, string> = {}): Prom
       await realtime.close(); // closes the HTTP server too
       await mail?.close();
       await t.drop();
+      fs.rmSync(clientDir, { recursive: true, force: true });
     },
   };
 }
