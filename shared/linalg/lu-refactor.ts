@@ -9,7 +9,7 @@ import { SINGULAR_PIVOT_RELATIVE, type LuFactors } from './lu-factor';
 
 /**
  * Overwrite the values of `f` with the factors of `a`, which must have the pattern `f` was built
- * from (same colPtr/rowIdx). Returns false — leaving `f` unusable until a full factorisation —
+ * from (same colPtr/rowIdx). `work` is scratch of length n (any contents). Returns false — leaving `f` unusable until a full factorisation —
  * when a pivot is zero or smaller than `pivotTolerance` × the largest entry below it.
  */
 export function luRefactor(f: LuFactors, a: CscMatrix, pivotTolerance = 1e-3, work: Float64Array = new Float64Array(f.n)): boolean {
@@ -20,6 +20,9 @@ export function luRefactor(f: LuFactors, a: CscMatrix, pivotTolerance = 1e-3, wo
   let worstRatio = 1;
   for (let k = 0; k < n; k++) {
     const col = colPerm[k];
+    // clear this column's pattern first: the scratch vector may hold anything (a caller may share it)
+    for (let p = Up[k]; p < Up[k + 1]; p++) x[Ui[p]] = 0;
+    for (let q = Lp[k] + 1; q < Lp[k + 1]; q++) x[Li[q]] = 0;
     let colMax = 0;
     for (let p = Ap[col]; p < Ap[col + 1]; p++) {
       const v = Ax[p];

@@ -43,7 +43,10 @@ export class SparseLuSolver {
   /** once the diagonal pivots have failed on this pattern, go straight to the pivot search */
   private staticFailed = false;
   private factors: LuFactors | null = null;
+  /** scratch of the numeric factorisation */
   private readonly work: Float64Array;
+  /** scratch of the triangular solves (kept apart from `work`) */
+  private readonly solveWork: Float64Array;
   private readonly pivotTolerance: number;
   private readonly refactorTolerance: number;
   private readonly staticPivotFirst: boolean;
@@ -59,6 +62,7 @@ export class SparseLuSolver {
     this.staticPivotFirst = options.staticPivotFirst ?? true;
     this.order = options.ordering === 'natural' ? Int32Array.from({ length: pattern.cols }, (_, i) => i) : approximateMinimumDegree(pattern);
     this.work = new Float64Array(pattern.cols);
+    this.solveWork = new Float64Array(pattern.cols);
   }
 
   /** Factorise the current values of `pattern` (refactorisation when possible). @throws SingularMatrixError */
@@ -104,13 +108,13 @@ export class SparseLuSolver {
   /** x = A⁻¹·b for the last factorised values. */
   solve(b: ArrayLike<number>, x: Float64Array = new Float64Array(this.pattern.cols)): Float64Array {
     if (!this.factors) throw new Error('SparseLuSolver.solve called before factor()');
-    return luSolve(this.factors, b, x, this.work);
+    return luSolve(this.factors, b, x, this.solveWork);
   }
 
   /** x = A⁻ᵀ·b for the last factorised values (adjoint sensitivities). */
   solveTransposed(b: ArrayLike<number>, x: Float64Array = new Float64Array(this.pattern.cols)): Float64Array {
     if (!this.factors) throw new Error('SparseLuSolver.solveTransposed called before factor()');
-    return luSolveTransposed(this.factors, b, x, this.work);
+    return luSolveTransposed(this.factors, b, x, this.solveWork);
   }
 
   /** smallest |pivot| / column max of the last factorisation (1 = ideal, → 0 = near singular) */

@@ -56,3 +56,35 @@ export function bridge(): SheetInput {
     ],
   };
 }
+
+/** A k×k grid of resistors (values varied so the matrix is not uniform), 5 V into one corner, ground at the other. */
+export function resistorMesh(k: number): SheetInput {
+  const parts: SheetInput['parts'] = [
+    { id: 'V1', type: 'dc_voltage_source', params: { voltage: 5 } },
+    { id: 'GND1', type: 'ground' },
+    { id: 'MID', type: 'net_label', params: { name: 'mid' } },
+  ];
+  const wires: SheetInput['wires'] = [{ from: 'V1.neg', to: 'GND1.g' }];
+  const first = new Map<number, string>();
+  const attach = (node: number, pin: string) => {
+    const f = first.get(node);
+    if (f) wires.push({ from: f, to: pin });
+    else first.set(node, pin);
+  };
+  let n = 0;
+  for (let r = 0; r < k; r++)
+    for (let c = 0; c < k; c++) {
+      const here = r * k + c;
+      for (const [dr, dc] of [[0, 1], [1, 0]]) {
+        if (r + dr >= k || c + dc >= k) continue;
+        const id = `R${++n}`;
+        parts.push({ id, type: 'resistor', params: { resistance: 1000 + 37 * ((n * 7) % 11) } });
+        attach(here, `${id}.a`);
+        attach((r + dr) * k + c + dc, `${id}.b`);
+      }
+    }
+  attach(0, 'V1.pos');
+  attach(k * k - 1, 'GND1.g');
+  attach(Math.floor(k / 2) * k + Math.floor(k / 2), 'MID.n');
+  return { format: 'tapline.sheet', version: 1, parts, wires };
+}

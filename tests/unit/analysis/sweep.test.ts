@@ -8,7 +8,7 @@ import { solveOperatingPoint } from '../../../shared/engine';
 import type { SheetInput } from '../../../shared/sheet/schema';
 import npnBias from '../../../examples/npn-bias.json';
 import ldrNightLight from '../../../examples/ldr-night-light.json';
-import { divider } from './fixtures';
+import { divider, resistorMesh } from './fixtures';
 
 function withParam(sheet: SheetInput, sets: Array<[string, string, number]>): SheetInput {
   const copy = structuredClone(sheet);
@@ -43,6 +43,13 @@ describe('sweeps equal independent operating-point solves', () => {
     // closed form at the ends: V·R2/(R1+R2)
     expect(t.columns['V(tap)'][0]).toBeCloseTo((12 * 1000) / 28000, 12);
     expectMatchesIndependent(t, sheet, [['R2', 'resistance']]);
+  });
+
+  it('linear with fill-in: a 9×9 resistor mesh over one resistor (sparse LU refactorisations)', () => {
+    const sheet = resistorMesh(9);
+    const t = runSweep(sheet, { axes: [{ target: { kind: 'param', part: 'R40', param: 'resistance' }, steps: { from: 10, to: 100000, points: 9, scale: 'log' } }] });
+    expect(t.errors).toEqual([]);
+    expectMatchesIndependent(t, sheet, [['R40', 'resistance']]);
   });
 
   it('non-linear: the NPN bias example over its supply voltage', () => {

@@ -115,3 +115,29 @@ describe('sparse LU solves like ml-matrix (dense LU) and mathjs (slu/lusolve)', 
     }
   });
 });
+
+describe('property: any regular random sparse matrix (fast-check)', () => {
+  it('solves like ml-matrix, first factorisation and refactorisation with new values alike', async () => {
+    const fc = (await import('fast-check')).default;
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 45 }), fc.integer({ min: 0, max: 4 }), fc.double({ min: 0, max: 0.6, noNaN: true }), fc.integer({ min: 1, max: 1e9 }), (n, perColumn, zeroDiagonalFraction, seed) => {
+        const { a, dense } = randomSparse({ n, perColumn, zeroDiagonalFraction, seed });
+        const b = Array.from({ length: n }, (_, i) => 1 + i);
+        const solver = new SparseLuSolver(a);
+        solver.factor();
+        const ref = new LuDecomposition(new Matrix(dense)).solve(Matrix.columnVector(b)).to1DArray();
+        const scale = Math.max(1, ...ref.map(Math.abs));
+        expect(maxAbsDiff(solver.solve(b), ref) / scale).toBeLessThan(1e-9);
+        // new values on the same pattern after a solve (regression: the solve's scratch must not
+        // leak into the refactorisation)
+        for (let p = 0; p < a.values.length; p++) a.values[p] *= 1 + 0.2 * Math.cos(p + seed);
+        for (let j = 0; j < n; j++) for (let p = a.colPtr[j]; p < a.colPtr[j + 1]; p++) dense[a.rowIdx[p]][j] = a.values[p];
+        solver.factor();
+        const ref2 = new LuDecomposition(new Matrix(dense)).solve(Matrix.columnVector(b)).to1DArray();
+        const scale2 = Math.max(1, ...ref2.map(Math.abs));
+        expect(maxAbsDiff(solver.solve(b), ref2) / scale2).toBeLessThan(1e-8);
+      }),
+      { numRuns: 150 },
+    );
+  });
+});
