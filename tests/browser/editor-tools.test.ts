@@ -112,6 +112,21 @@ describe('design tools in the editor', () => {
     expect(rows).toHaveLength(3);
   });
 
+  it('exports the schematic as PNG and SVG pictures and the sheet as its file', async () => {
+    await page.getByTestId('export-menu').click();
+    const [png] = await Promise.all([page.waitForEvent('download'), page.getByTestId('export-png').click()]);
+    const bytes = fs.readFileSync((await png.path())!);
+    expect(png.suggestedFilename()).toMatch(/\.png$/);
+    expect(bytes.subarray(1, 4).toString('latin1')).toBe('PNG'); // PNG signature (ISO/IEC 15948)
+    await page.getByTestId('export-menu').click();
+    const svg = await downloaded(() => page.getByTestId('export-svg').click());
+    expect(svg.text).toMatch(/^<svg[\s\S]*R1[\s\S]*<\/svg>$/);
+    await page.getByTestId('export-menu').click();
+    const json = await downloaded(() => page.getByTestId('export-json').click());
+    const sheet = JSON.parse(json.text);
+    expect(sheet).toMatchObject({ format: 'tapline.sheet', version: 1, title: '12 V battery monitor tap' });
+  });
+
   it('opens the printable report with the runs, the parts list and the safety note', async () => {
     await page.getByTestId('export-menu').click();
     await page.getByTestId('open-report').click();
