@@ -232,3 +232,19 @@ describe('the REST API and the live log', () => {
     b.stop();
   });
 });
+
+describe('the database notice connection', () => {
+  it('comes back after PostgreSQL drops it, and REST saves reach live clients again', async () => {
+    const projectId = await createSharedProject(live, ada, sheet(), [[ben, 'editor']]);
+    const b = await openSheet(live.url, ben, projectId);
+    const pool = live.s.t.database.pool;
+    const killed = await pool.query("select pg_terminate_backend(pid) from pg_stat_activity where datname = current_database() and query ilike 'listen tapline_realtime%'");
+    expect(killed.rowCount).toBeGreaterThan(0);
+    await eventually('the listener is back', async () => (await pool.query("select 1 from pg_stat_activity where datname = current_database() and query ilike 'listen tapline_realtime%'")).rowCount! > 0);
+    const changed = sheet();
+    changed.title = 'saved over REST after the reconnect';
+    expect((await ada.patch(`/api/projects/${projectId}`).send({ sheet: changed, baseVersion: 1 })).status).toBe(200);
+    await eventually('ben receives it', () => b.client.document?.title === 'saved over REST after the reconnect');
+    b.stop();
+  });
+});
