@@ -179,7 +179,7 @@ function report(results: RunResult[]): void {
   const ms = (v: number) => (Number.isFinite(v) ? v.toFixed(1) : '—');
   const three = (a: number, b: number, c: number) => `${ms(a)} / ${ms(b)} / ${ms(c)}`;
   console.log(`\n${CLIENTS} clients × ${RATE} ops/s for ${SECONDS} s, one sheet of ${PARTS} parts, loopback (target p99 < 50 ms)`);
-  console.log('setup        | ops/s | refused | server apply+broadcast p50/p95/p99 ms | transaction p50/p99 | server lag p99 | ack p50/p95/p99 ms  | delivery p50/p95/p99 ms | client lag p99');
+  console.log('setup        | ops/s | refused | server apply+broadcast p50/p95/p99 ms | transaction p50/p99/max   | server lag p99 | ack p50/p95/p99 ms  | delivery p50/p95/p99 ms | client lag p99');
   for (const r of results) {
     r.server.forEach((t, k) => {
       const first = k === 0;
@@ -189,7 +189,7 @@ function report(results: RunResult[]): void {
           (first ? (r.acked / r.seconds).toFixed(0) : '').padStart(5),
           (first ? String(r.refused) : '').padStart(7),
           `${r.server.length > 1 ? `p${k + 1}: ` : ''}${three(t.p50, t.p95, t.p99)} (n=${t.count})`.padEnd(37),
-          `${ms(t.commit.p50)} / ${ms(t.commit.p99)} (n=${t.commit.count})`.padEnd(19),
+          `${ms(t.commit.p50)} / ${ms(t.commit.p99)} / ${ms(t.commit.max)} (n=${t.commit.count})`.padEnd(25),
           `${ms(t.loopLagP99)} ms`.padEnd(14),
           (first ? three(percentile(r.ack, 50), percentile(r.ack, 95), percentile(r.ack, 99)) : '').padEnd(19),
           (first ? three(percentile(r.delivery, 50), percentile(r.delivery, 95), percentile(r.delivery, 99)) : '').padEnd(23),
