@@ -3,6 +3,7 @@
 // change; a dropped connection shows a banner, keeps the edits made meanwhile, and recovers.
 import fs from 'node:fs';
 import http from 'node:http';
+import os from 'node:os';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -26,13 +27,17 @@ let ada: Page;
 let ben: Page;
 let problems: PageProblems[];
 let projectId: string;
+let clientDir: string;
 
 // The app as server/main.ts runs it, but with the socket.io server at hand (to drop connections).
 beforeAll(async () => {
   if (!fs.existsSync(path.join(distDir, 'index.html'))) throw new Error('dist/index.html is missing: run `npx vite build` first (npm test does).');
+  // A private copy of the build: in a shared checkout someone may rebuild dist/ mid-test.
+  clientDir = fs.mkdtempSync(path.join(os.tmpdir(), 'tapline-collab-dist-'));
+  fs.cpSync(distDir, clientDir, { recursive: true, filter: (src) => !src.endsWith('.map') });
   t = await createTestDatabase();
   const config = loadConfig({ DATABASE_URL: t.url, NODE_ENV: 'test', RATE_LIMIT_SIGNIN: '1000' });
-  const app = createApp({ config, database: t.database, staticDir: distDir });
+  const app = createApp({ config, database: t.database, staticDir: clientDir });
   server = http.createServer(app);
   realtime = attachRealtime(server, { config, database: t.database, sessionHandlers: sessionHandlersOf(app) });
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
@@ -57,6 +62,7 @@ afterAll(async () => {
   server?.closeAllConnections();
   await realtime?.close();
   await t?.drop();
+  if (clientDir) fs.rmSync(clientDir, { recursive: true, force: true });
 });
 
 const resistance = (page: Page, id: string) => page.locator(`#param-${id}-resistance`);
