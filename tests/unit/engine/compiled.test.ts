@@ -1,7 +1,7 @@
 // The compiled form used by sweeps and Monte Carlo: param overrides, conditions, warm starts,
 // determinism.
 import { describe, expect, it } from 'vitest';
-import { compileCircuit, solveOperatingPoint } from '../../../shared/engine';
+import { compileCircuit, solveOperatingPoint, type ParamOverrides } from '../../../shared/engine';
 import { part, sheet, wire } from '../../support/reference/sheets';
 import { expectRel } from './helpers';
 
@@ -115,7 +115,8 @@ describe('compileCircuit', () => {
       [wire('V1.pos', 'RV1.a'), wire('RV1.b', 'G.g'), wire('RV1.w', 'R1.a'), wire('R1.b', 'D1.anode'), wire('D1.cathode', 'G.g'), wire('V1.neg', 'G.g')],
     );
     const c = compileCircuit(s);
-    for (const ov of [{ RV1: { position: 0 } }, { RV1: { position: 1 } }, { D1: { seriesResistance: 50 } }, { RV1: { position: 0.25 }, D1: { seriesResistance: 0 } }]) {
+    const overrides: ParamOverrides[] = [{ RV1: { position: 0 } }, { RV1: { position: 1 } }, { D1: { seriesResistance: 50 } }, { RV1: { position: 0.25 }, D1: { seriesResistance: 0 } }];
+    for (const ov of overrides) {
       const a = c.solve({ paramOverrides: ov, initialGuess: 'previous' });
       const edited = JSON.parse(JSON.stringify(s));
       for (const [id, o] of Object.entries(ov)) Object.assign(edited.parts.find((p: { id: string }) => p.id === id).params, o);
