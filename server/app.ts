@@ -11,6 +11,7 @@ import { authRouter, meRouter } from './auth/routes';
 import { fakeProviderRouter } from './auth/fake-provider/routes';
 import { createCsrf } from './security/csrf';
 import { securityHeaders } from './security/headers';
+import { requireBodyType } from './security/body-types';
 import { invitationLimiter, signInLimiter } from './security/rate-limits';
 import { projectAccessGuard } from './authz/project-access';
 import { projectsRouter } from './projects/routes';
@@ -64,6 +65,7 @@ export function createApp(deps: AppDeps): Express {
   const sessionHandlers: RequestHandler[] = [sessions.middleware, passport.initialize(), passport.session()];
   app.locals.sessionHandlers = sessionHandlers;
   app.use(sessionHandlers);
+  app.use('/api', requireBodyType);
   app.use(express.json({ limit: JSON_LIMIT }));
 
   app.use('/auth/logout', csrf.protect);

@@ -18,6 +18,35 @@ export const notFoundApi: RequestHandler = (req, _res, next) => {
   next(new HttpError(404, 'not_found', `No API route ${req.method} ${req.path}`));
 };
 
+/** The parts of a body-parser / raw-body error this handler reads. */
+interface BodyReadError {
+  status?: number;
+  type?: string;
+  message?: string;
+  limit?: number;
+  length?: number;
+  charset?: string;
+  encoding?: string;
+}
+
+// What went wrong reading a request body, in words a caller can act on.
+function describeBodyError(err: BodyReadError, status: number): { code: string; message: string } {
+  switch (err.type) {
+    case 'entity.parse.failed':
+      return { code: 'malformed_json', message: `The request body is not valid JSON (${err.message}). Send one JSON object with Content-Type: application/json.` };
+    case 'entity.too.large':
+      return { code: 'too_large', message: `The request body is ${err.length ?? 'more than'} bytes; the API reads at most ${err.limit ?? 'its limit of'} bytes. A sheet of a few hundred parts is far smaller: is it the right data?` };
+    case 'charset.unsupported':
+      return { code: 'unsupported_charset', message: `The request body is in charset "${err.charset}"; send JSON in UTF-8.` };
+    case 'encoding.unsupported':
+      return { code: 'unsupported_encoding', message: `The request body is compressed with "${err.encoding}", which the API does not read; send it uncompressed, or as gzip, deflate or br.` };
+    case 'request.aborted':
+      return { code: 'aborted', message: 'The request body ended before its announced length; send it again.' };
+    default:
+      return { code: 'bad_request', message: `The request could not be read (${String(err.message ?? 'bad request')}).${status === 400 ? ' Check its body and headers.' : ''}` };
+  }
+}
+
 // The one place errors become responses: never a stack trace to the client.
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof HttpError) {
@@ -25,8 +54,10 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     return;
   }
   const status = typeof err?.status === 'number' && err.status >= 400 && err.status < 500 ? err.status : 500;
-  if (status === 500) console.error('server error:', err);
-  const code = err?.type === 'entity.parse.failed' ? 'malformed_json' : err?.type === 'entity.too.large' ? 'too_large' : status === 500 ? 'internal' : 'bad_request';
-  const message = status === 500 ? 'Something went wrong on the server; the error is logged. Try again.' : String(err?.message ?? 'Bad request');
-  res.status(status).json({ error: { code, message } });
+  if (status === 500) {
+    console.error('server error:', err);
+    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on the server; the error is logged. Try again.' } });
+    return;
+  }
+  res.status(status).json({ error: describeBodyError(err as BodyReadError, status) });
 };

@@ -4,10 +4,12 @@ import type { Db } from '../db/client';
 import { HttpError } from '../http-errors';
 import { accessOf, type RequireProjectRole } from '../authz/project-access';
 import { parseWith } from '../validation';
+import { MAX_INT4 } from '../projects/schemas';
 import { changeMember, listMembers } from './repo';
 
 const RoleBody = z.strictObject({ role: z.enum(['viewer', 'editor', 'owner']) });
-const UserIdParam = z.coerce.number().int().positive();
+// Plain decimal digits only ("0x1", "1e3" or " 1" are not user ids), within the int4 column.
+const UserIdParam = z.string().regex(/^[1-9][0-9]{0,9}$/).transform(Number).pipe(z.number().max(MAX_INT4));
 
 function targetUserId(req: Request): number {
   const r = UserIdParam.safeParse(req.params.userId);

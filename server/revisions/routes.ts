@@ -4,13 +4,13 @@ import type { Db } from '../db/client';
 import { HttpError } from '../http-errors';
 import { accessOf, type RequireProjectRole } from '../authz/project-access';
 import { parseWith } from '../validation';
-import { TitleSchema } from '../projects/schemas';
+import { TitleSchema, VersionSchema } from '../projects/schemas';
 import { presentProject } from '../projects/present';
 import { userSummary } from '../projects/repo';
 import { getRevision, listRevisions, restoreRevision, saveRevision } from './repo';
 
 const LabelBody = z.strictObject({ label: TitleSchema });
-const RestoreBody = z.strictObject({ baseVersion: z.number().int().min(0).optional() });
+const RestoreBody = z.strictObject({ baseVersion: VersionSchema.optional() });
 
 function revisionId(req: Request): string {
   const r = z.uuid().safeParse(req.params.revId);
