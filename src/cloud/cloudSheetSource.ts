@@ -58,10 +58,13 @@ export function createCloudSheetSource(projectId: string, qc: QueryClient): Shee
     get save() {
       return readOnly ? undefined : save;
     },
-    async load(signal) {
+    // The caller's signal only tells us the result is no longer wanted (the editor ignores it);
+    // it must not abort the shared query fetch, which a remount (React StrictMode runs effects
+    // twice in development) joins instead of starting anew.
+    async load() {
       const p = await qc.fetchQuery({
         queryKey: queryKeys.projects.detail(projectId),
-        queryFn: ({ signal: s }) => endpoints.getProject(projectId, signal ?? s),
+        queryFn: ({ signal: s }) => endpoints.getProject(projectId, s),
         staleTime: 0,
       });
       readOnly = p.role === 'viewer';
@@ -80,8 +83,8 @@ export function createCloudSheetSource(projectId: string, qc: QueryClient): Shee
 export function createSharedSheetSource(token: string, qc: QueryClient): SheetSource {
   return {
     key: `shared-${token}`,
-    async load(signal) {
-      const s = await qc.fetchQuery({ queryKey: queryKeys.shared(token), queryFn: ({ signal: sg }) => endpoints.getShared(token, signal ?? sg), staleTime: 0 });
+    async load() {
+      const s = await qc.fetchQuery({ queryKey: queryKeys.shared(token), queryFn: ({ signal: sg }) => endpoints.getShared(token, sg), staleTime: 0 });
       return { sheet: readable(s.sheet, `Shared project “${s.title}”`), readOnly: true, title: s.title, version: s.version, notice: 'Shared read-only link: you can solve this sheet but not change it.' };
     },
   };
@@ -91,8 +94,8 @@ export function createSharedSheetSource(token: string, qc: QueryClient): SheetSo
 export function createRevisionSheetSource(projectId: string, revId: string, qc: QueryClient): SheetSource {
   return {
     key: `rev-${projectId}_${revId}`,
-    async load(signal) {
-      const r = await qc.fetchQuery({ queryKey: queryKeys.projects.revision(projectId, revId), queryFn: ({ signal: sg }) => endpoints.getRevision(projectId, revId, signal ?? sg) });
+    async load() {
+      const r = await qc.fetchQuery({ queryKey: queryKeys.projects.revision(projectId, revId), queryFn: ({ signal: sg }) => endpoints.getRevision(projectId, revId, sg) });
       return {
         sheet: readable(r.sheet, `Revision “${r.label}”`),
         readOnly: true,
