@@ -12,7 +12,8 @@ import { presentProject } from './present';
 /** Largest sheet file accepted for import, bytes. */
 export const MAX_SHEET_FILE_BYTES = 1024 * 1024;
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_SHEET_FILE_BYTES, files: 1, fields: 4, fieldSize: 1024 } });
+// File names arrive as raw UTF-8 from browsers; busboy would read them as latin1 (mojibake).
+const upload = multer({ storage: multer.memoryStorage(), defParamCharset: 'utf8', limits: { fileSize: MAX_SHEET_FILE_BYTES, files: 1, fields: 4, fieldSize: 1024 } });
 
 // multer's own errors become our JSON errors with a hint.
 const receiveFile: RequestHandler = (req, res, next) => {
@@ -26,9 +27,16 @@ const receiveFile: RequestHandler = (req, res, next) => {
   });
 };
 
+const printable = (text: string) => [...text].map((ch) => (ch.charCodeAt(0) < 0x20 || ch.charCodeAt(0) === 0x7f ? ' ' : ch)).join('');
+
 function fileTitle(name: string): string {
-  const base = name.replace(/\.(tapline\.)?json$/i, '');
-  return [...base].map((ch) => (ch.charCodeAt(0) < 0x20 || ch.charCodeAt(0) === 0x7f ? ' ' : ch)).join('').trim().slice(0, 120);
+  return printable(name.replace(/\.(tapline\.)?json$/i, '')).trim().slice(0, 120);
+}
+
+/** A client-chosen file name as it may appear in a message: one line, not too long. */
+function shownName(name: string): string {
+  const one = printable(name);
+  return one.length > 80 ? `${one.slice(0, 80)}…` : one;
 }
 
 /** A file name the browser will save under, made of the title's letters and digits. */
@@ -42,13 +50,15 @@ export function importExportRouter(db: Db, requireProjectRole: RequireProjectRol
   const r = Router();
 
   r.post('/projects/import', requireUser, receiveFile, async (req, res) => {
+    const unknown = Object.keys(req.body ?? {}).find((k) => k !== 'title');
+    if (unknown !== undefined) throw new HttpError(400, 'invalid_request', `Form field "${unknown.slice(0, 64)}" is not one this route takes: send "file" and optionally "title".`, unknown.slice(0, 64));
     const file = req.file;
     if (!file) throw new HttpError(400, 'file_missing', 'No file was sent. Choose a .tapline.json sheet file and send it in the form field "file".', 'file');
     let data: unknown;
     try {
       data = JSON.parse(file.buffer.toString('utf8').replace(/^\uFEFF/, ''));
     } catch (e) {
-      throw new HttpError(400, 'invalid_file', `"${file.originalname}" is not a JSON file (${(e as Error).message}). Export a sheet from Tapline and import that file.`, 'file');
+      throw new HttpError(400, 'invalid_file', `"${shownName(file.originalname)}" is not a JSON file (${(e as Error).message}). Export a sheet from Tapline and import that file.`, 'file');
     }
     const sheet = validateSheet(data, 'file');
     const rawTitle = typeof req.body?.title === 'string' && req.body.title.trim() ? req.body.title
