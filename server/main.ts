@@ -14,6 +14,14 @@ function exitWith(what: string, todo: string): never {
   process.exit(1);
 }
 
+// A handler that throws in a promise (a bug, or input no validator foresaw) must not take down
+// every other user's requests and sockets: log it loudly and keep serving. The request that hit it
+// gets no answer; its client times out and retries. Synchronous uncaught exceptions still end the
+// process (its state may be broken then).
+process.on('unhandledRejection', (reason) => {
+  console.error('tapline: unhandled rejection (a bug; the request that caused it was not answered):', reason);
+});
+
 async function main(): Promise<void> {
   let config;
   try {

@@ -147,6 +147,15 @@ describe.each(routes)('$name', (route) => {
     expect(res.body.error.field).toBe(field);
   });
 
+  it('a value nested 100 000 levels deep, in a known or an unknown field: 400', async () => {
+    const deep = `${'['.repeat(100_000)}${']'.repeat(100_000)}`;
+    const [field, ...others] = Object.keys(route.valid);
+    const rest = JSON.stringify(Object.fromEntries(others.map((k) => [k, route.valid[k]]))).slice(1, -1);
+    const withDeep = (key: string, extra: string) => `{"${key}":${deep}${extra ? `,${extra}` : ''}}`;
+    await refused(route, 'deep unknown field', 400, undefined, (r) => r.set('Content-Type', 'application/json').send(withDeep('deep', JSON.stringify(route.valid).slice(1, -1))));
+    await refused(route, `deep ${field}`, 400, undefined, (r) => r.set('Content-Type', 'application/json').send(withDeep(field, rest)));
+  });
+
   it.each(['__proto__', 'constructor', 'prototype'])('a "%s" key is refused: 400', async (key) => {
     const text = JSON.stringify(route.valid).replace(/^\{/, `{"${key}": {"admin": true, "role": "owner"},`);
     const res = await refused(route, key, 400, 'invalid_request', (r) => r.set('Content-Type', 'application/json').send(text));
