@@ -6,10 +6,10 @@ import { AnalysisInputError, CircuitFailureError, parseOutputKey, parseTargetKey
 import type { CircuitSolveOptions } from '../../shared/engine/compile';
 import { failure } from '../../shared/engine/result';
 import { parseValue, type Unit } from '../../shared/units';
-import { formatFlags, parseArgs, UsageError, type FlagSpec, type ParsedArgs } from '../args';
+import { parseArgs, UsageError, type FlagSpec, type ParsedArgs } from '../args';
 import { EXIT_INVALID, EXIT_SOLVED, EXIT_UNSOLVABLE, type CliIO } from '../io';
 import { readSheet, solveOptionsFromFlags } from '../sheet-input';
-import type { CliCommand } from './types';
+import { printedHelp, type CliCommand } from './types';
 
 export const csvFlag: FlagSpec = { name: 'csv', description: 'print CSV instead of JSON' };
 
@@ -68,10 +68,7 @@ export async function runSheetCommand(
   body: (ctx: { args: ParsedArgs; prepared: PreparedCircuit; base: CircuitSolveOptions; pretty: boolean; csv: boolean }) => void,
 ): Promise<number> {
   const args = parseArgs(argv, cmd.flags);
-  if (args.flags.help) {
-    io.log(`${cmd.usage}\n\n${cmd.summary}\n\n${formatFlags(cmd.flags)}`);
-    return EXIT_SOLVED;
-  }
+  if (printedHelp(cmd, args, io)) return EXIT_SOLVED;
   if (args.positionals.length !== 1) throw new UsageError(args.positionals.length ? 'give exactly one sheet file' : `which sheet file? e.g. npm run solve -- ${cmd.name} examples/battery-divider.json`);
   const pretty = args.flags.pretty === true;
   const file = args.positionals[0];

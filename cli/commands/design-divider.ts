@@ -2,9 +2,9 @@
 // (the designer lives in shared/design).
 import { designDivider, type DividerBudget, type DividerLoad, type DividerSpec } from '../../shared/design';
 import { isESeriesName } from '../../shared/units/eseries';
-import { formatFlags, parseArgs, UsageError } from '../args';
+import { parseArgs, UsageError } from '../args';
 import { EXIT_INVALID, EXIT_SOLVED } from '../io';
-import type { CliCommand } from './types';
+import { outputFlags, printedHelp, type CliCommand } from './types';
 import { csvFlag, emitText, parseNumber, toCsv } from './analysis-common';
 
 export const designDividerCommand: CliCommand = {
@@ -23,15 +23,11 @@ export const designDividerCommand: CliCommand = {
     { name: 'parts-per-leg', value: true, valueName: '1|2', description: '2 allows a series or parallel pair per leg' },
     { name: 'limit', value: true, valueName: 'N', description: 'how many candidates (default 10)' },
     csvFlag,
-    { name: 'pretty', description: 'indent the JSON output' },
-    { name: 'help', description: 'show this help' },
+    ...outputFlags,
   ],
   run(argv, io) {
     const args = parseArgs(argv, this.flags);
-    if (args.flags.help) {
-      io.log(`${this.usage}\n\n${this.summary}\n\n${formatFlags(this.flags)}`);
-      return EXIT_SOLVED;
-    }
+    if (printedHelp(this, args, io)) return EXIT_SOLVED;
     const f = args.flags;
     const str = (k: string) => (typeof f[k] === 'string' ? (f[k] as string) : undefined);
     if (!str('supply') || !str('target')) throw new UsageError('give --supply and --target, e.g. --supply 12 --target 3.3 --max-current 100u');

@@ -2,9 +2,9 @@
 // (the value finder lives in shared/design).
 import { findValue } from '../../shared/design';
 import { isESeriesName } from '../../shared/units/eseries';
-import { formatFlags, parseArgs, UsageError } from '../args';
+import { parseArgs, UsageError } from '../args';
 import { EXIT_INVALID, EXIT_SOLVED } from '../io';
-import type { CliCommand } from './types';
+import { outputFlags, printedHelp, type CliCommand } from './types';
 import { csvFlag, emitText, parseNumber, toCsv } from './analysis-common';
 
 export const findValueCommand: CliCommand = {
@@ -18,15 +18,11 @@ export const findValueCommand: CliCommand = {
     { name: 'min-part', value: true, valueName: 'OHMS', description: 'smallest part value allowed' },
     { name: 'max-part', value: true, valueName: 'OHMS', description: 'largest part value allowed' },
     csvFlag,
-    { name: 'pretty', description: 'indent the JSON output' },
-    { name: 'help', description: 'show this help' },
+    ...outputFlags,
   ],
   run(argv, io) {
     const args = parseArgs(argv, this.flags);
-    if (args.flags.help) {
-      io.log(`${this.usage}\n\n${this.summary}\n\n${formatFlags(this.flags)}`);
-      return EXIT_SOLVED;
-    }
+    if (printedHelp(this, args, io)) return EXIT_SOLVED;
     if (args.positionals.length !== 1) throw new UsageError('give one target resistance, e.g. 4k7 or 4700');
     const target = parseNumber(args.positionals[0], 'target', 'Ω');
     const series = typeof args.flags.series === 'string' ? args.flags.series.toUpperCase() : 'E24';

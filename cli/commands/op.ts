@@ -1,10 +1,10 @@
 // `solve FILE.json` / `solve op FILE.json`: the DC operating point.
 import { compileCircuit } from '../../shared/engine/compile';
 import { failure } from '../../shared/engine/result';
-import { formatFlags, parseArgs, UsageError } from '../args';
+import { parseArgs, UsageError } from '../args';
 import { EXIT_INVALID, EXIT_SOLVED, EXIT_UNSOLVABLE } from '../io';
 import { readSheet, solveOptionsFromFlags } from '../sheet-input';
-import { commonSheetFlags, type CliCommand } from './types';
+import { commonSheetFlags, printedHelp, type CliCommand } from './types';
 
 export const opCommand: CliCommand = {
   name: 'op',
@@ -13,10 +13,7 @@ export const opCommand: CliCommand = {
   flags: commonSheetFlags,
   run(argv, io) {
     const args = parseArgs(argv, this.flags);
-    if (args.flags.help) {
-      io.log(`${this.usage}\n\n${this.summary}\n\n${formatFlags(this.flags)}`);
-      return EXIT_SOLVED;
-    }
+    if (printedHelp(this, args, io)) return EXIT_SOLVED;
     if (args.positionals.length !== 1) throw new UsageError(args.positionals.length ? 'give exactly one sheet file' : 'which sheet file? e.g. npm run solve -- examples/divider.json');
     const pretty = args.flags.pretty === true;
     const file = args.positionals[0];

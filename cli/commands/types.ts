@@ -1,4 +1,4 @@
-import type { FlagSpec } from '../args';
+import { formatFlags, type FlagSpec, type ParsedArgs } from '../args';
 import type { CliIO } from '../io';
 
 /** One CLI command. Add new analyses (sweep, worst-case, monte-carlo, find-value) as new entries in commands/index.ts. */
@@ -19,3 +19,16 @@ export const commonSheetFlags: readonly FlagSpec[] = [
   { name: 'illuminance', value: true, valueName: 'LUX', description: 'conditions.illuminanceLux for this run' },
   { name: 'help', description: 'show this help' },
 ];
+
+/** Flags of the commands that print a ranking or table and read no sheet. */
+export const outputFlags: readonly FlagSpec[] = [
+  { name: 'pretty', description: 'indent the JSON output' },
+  { name: 'help', description: 'show this help' },
+];
+
+/** Prints the command's usage when `--help` was given; returns whether it did. */
+export function printedHelp(cmd: CliCommand, args: ParsedArgs, io: CliIO): boolean {
+  if (!args.flags.help) return false;
+  io.log(`${cmd.usage}\n\n${cmd.summary}\n\n${formatFlags(cmd.flags)}`);
+  return true;
+}
