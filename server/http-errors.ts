@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { isDatabaseUnavailable } from './db/unavailable';
 
 /** An error with an HTTP status and a stable code, rendered as `{ error: { code, message, field? } }`. */
 export class HttpError extends Error {
@@ -51,6 +52,12 @@ function describeBodyError(err: BodyReadError, status: number): { code: string; 
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof HttpError) {
     res.status(err.status).json({ error: { ...err.details, code: err.code, message: err.message, ...(err.field ? { field: err.field } : {}) } });
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    console.error(`database unavailable: ${(err as Error).message}`);
+    res.status(503).setHeader('Retry-After', '2');
+    res.json({ error: { code: 'db_unavailable', message: 'The database is not answering right now (it may be restarting), so this request may not have been carried out. Try again in a few seconds; reload first if it was a change.' } });
     return;
   }
   const status = typeof err?.status === 'number' && err.status >= 400 && err.status < 500 ? err.status : 500;
