@@ -9,6 +9,7 @@ import { EditorContext } from './EditorContext';
 import { createEditor, type Editor } from './store/actions';
 import { startLiveSolve, type LiveSolve } from './solve/liveSolve';
 import { startSolverWorker } from './solve/workerHandle';
+import { loadInlineSolver } from './solve/loadInlineSolver';
 import { resolveSheetSource, type LoadedSheet, type SheetSource } from './sheetSource';
 import { prepareSheet } from './sources/prepareSheet';
 import { SchematicCanvas } from './canvas/SchematicCanvas';
@@ -54,7 +55,8 @@ export function SheetEditor({ routeId, source: given }: { routeId: string; sourc
         const editor = createEditor(sheet);
         editor.loadDocument(editor.getDoc(), { readOnly: loaded.readOnly });
         editor.actions.setSymbolStyle(useEditorUi.getState().symbolStyle);
-        live = startLiveSolve(editor, startSolverWorker);
+        // small sheets solve in the edit's own task (readings in the same frame), the rest in the worker
+        live = startLiveSolve(editor, startSolverWorker, { inline: loadInlineSolver() });
         setState({ kind: 'ready', editor, live, loaded, source });
       },
       (e: unknown) => !abort.signal.aborted && setState({ kind: 'error', message: e instanceof Error ? e.message : String(e) }),

@@ -63,7 +63,8 @@ export function useAutosave(
       const src = source();
       if (!src.save) return;
       dirty.current = true;
-      setStatus({ kind: 'dirty' });
+      // the same state object when already dirty, so a slider pull does not re-render the screen
+      setStatus((prev) => (prev.kind === 'dirty' ? prev : { kind: 'dirty' }));
       const delay = src.autosaveDelayMs ?? 600;
       if (delay <= 0) return;
       if (timer.current) clearTimeout(timer.current);

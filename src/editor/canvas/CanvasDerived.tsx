@@ -1,16 +1,15 @@
-// Values every node needs, computed once per change for the whole canvas.
+// Values every node needs, computed once per change for the whole canvas. Solve results are not
+// here: each piece of a node subscribes to its own slice of the solve store (PartNode.tsx), so a
+// new operating point does not re-render every node through this context.
 import { createContext, useContext } from 'react';
-import type { NetTag } from '../solve/solveView';
 
 export interface CanvasDerived {
   /** "R1.a" → number of wire ends on the pin */
   wireCounts: Record<string, number>;
-  /** "R1.b" → the net tag drawn there */
-  tags: Record<string, NetTag>;
   showReadings: boolean;
 }
 
-export const CanvasDerivedContext = createContext<CanvasDerived>({ wireCounts: {}, tags: {}, showReadings: true });
+export const CanvasDerivedContext = createContext<CanvasDerived>({ wireCounts: {}, showReadings: true });
 
 export function useCanvasDerived(): CanvasDerived {
   return useContext(CanvasDerivedContext);

@@ -1,6 +1,6 @@
 // The schematic canvas: React Flow as a view of the sheet. Every gesture becomes an editor action;
 // React Flow never owns the parts or wires.
-import { useCallback, useMemo, useState, type DragEvent, type MouseEvent } from 'react';
+import { memo, useCallback, useMemo, useState, type DragEvent, type MouseEvent } from 'react';
 import {
   Background,
   BackgroundVariant,
@@ -14,7 +14,7 @@ import {
 } from '@xyflow/react';
 import { useShallow } from 'zustand/react/shallow';
 import { isPartType, type PartType } from '../../../shared/parts/specs';
-import { useEditor, useEditorState, useSolveState } from '../EditorContext';
+import { useEditor, useEditorState } from '../EditorContext';
 import { CanvasDerivedContext } from './CanvasDerived';
 import { createEdgeMapper, createNodeMapper, partCenter, wireCounts, type PartFlowNode, type WireFlowEdge } from './flowAdapter';
 import { PartNode } from './PartNode';
@@ -28,22 +28,26 @@ const edgeTypes = { wire: WireEdge };
 /** Zoom to fit, but never so far out that values become unreadable (pan for the rest). */
 export const FIT = { padding: 0.2, maxZoom: 1.4, minZoom: 0.75 };
 export const PART_DRAG_MIME = 'application/x-tapline-part';
+const SNAP_GRID: [number, number] = [GRID, GRID];
+const PAN_BUTTONS = [1, 2];
+const MULTI_SELECT_KEYS = ['Shift', 'Meta', 'Control'];
+const isValidConnection = (c: Connection | WireFlowEdge) => !(c.source === c.target && c.sourceHandle === c.targetHandle);
 
-export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
+/** The canvas; memoised, as nothing the editor screen re-renders for changes what it draws. */
+export const SchematicCanvas = memo(function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
   const editor = useEditor();
   const rf = useReactFlow<PartFlowNode, WireFlowEdge>();
   const { parts, wires, readOnly, tool, style } = useEditorState(
     useShallow((s) => ({ parts: s.doc.parts, wires: s.doc.wires, readOnly: s.session.readOnly, tool: s.session.tool, style: s.session.symbolStyle })),
   );
   const selection = useEditorState((s) => s.session.selection);
-  const tags = useSolveState((s) => s.tags);
   const [ghost, setGhost] = useState<{ x: number; y: number } | null>(null);
 
   const mapNodes = useMemo(createNodeMapper, []);
   const mapEdges = useMemo(createEdgeMapper, []);
   const nodes = useMemo(() => mapNodes(parts, new Set(selection.parts), readOnly), [mapNodes, parts, selection.parts, readOnly]);
   const edges = useMemo(() => mapEdges(wires, new Set(selection.wires)), [mapEdges, wires, selection.wires]);
-  const derived = useMemo(() => ({ wireCounts: wireCounts({ wires }), tags, showReadings }), [wires, tags, showReadings]);
+  const derived = useMemo(() => ({ wireCounts: wireCounts({ wires }), showReadings }), [wires, showReadings]);
 
   const onNodesChange = useCallback(
     (changes: NodeChange<PartFlowNode>[]) => {
@@ -122,6 +126,14 @@ export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
     [rf, tool.kind],
   );
 
+  // stable handlers: React Flow copies changed props into its own store on every render
+  const onNodeDragStart = useCallback((_e: unknown, _n: PartFlowNode, dragged: PartFlowNode[]) => editor.actions.beginDrag(dragged.length), [editor]);
+  const onNodeDragStop = useCallback(() => editor.actions.endDrag(), [editor]);
+  const onMoveEnd = useCallback(
+    (_e: unknown, vp: { x: number; y: number; zoom: number }) => editor.updateSession((s) => void (s.viewport = { x: vp.x, y: vp.y, zoom: vp.zoom })),
+    [editor],
+  );
+
   const onDrop = useCallback(
     (e: DragEvent) => {
       const type = e.dataTransfer.getData(PART_DRAG_MIME);
@@ -152,19 +164,19 @@ export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
           onNodesChange={onNodesChange}
           onEdgesChange={onEdgesChange}
           onConnect={onConnect}
-          onNodeDragStart={(_e, _n, dragged) => editor.actions.beginDrag(dragged.length)}
-          onNodeDragStop={() => editor.actions.endDrag()}
+          onNodeDragStart={onNodeDragStart}
+          onNodeDragStop={onNodeDragStop}
           onPaneClick={onPaneClick}
-          onMoveEnd={(_e, vp) => editor.updateSession((s) => void (s.viewport = { x: vp.x, y: vp.y, zoom: vp.zoom }))}
-          isValidConnection={(c) => !(c.source === c.target && c.sourceHandle === c.targetHandle)}
+          onMoveEnd={onMoveEnd}
+          isValidConnection={isValidConnection}
           connectionMode={ConnectionMode.Loose}
           connectionRadius={18}
           snapToGrid
-          snapGrid={[GRID, GRID]}
+          snapGrid={SNAP_GRID}
           selectionOnDrag
-          panOnDrag={[1, 2]}
+          panOnDrag={PAN_BUTTONS}
           panActivationKeyCode="Space"
-          multiSelectionKeyCode={['Shift', 'Meta', 'Control']}
+          multiSelectionKeyCode={MULTI_SELECT_KEYS}
           deleteKeyCode={null}
           disableKeyboardA11y
           nodesDraggable={!readOnly}
@@ -191,4 +203,4 @@ export function SchematicCanvas({ showReadings }: { showReadings: boolean }) {
       </div>
     </CanvasDerivedContext.Provider>
   );
-}
+});

@@ -1,20 +1,19 @@
 // A wire: an orthogonal run from pin to pin, leaving each pin in the direction its lead points.
 import { memo } from 'react';
 import { BaseEdge, getSmoothStepPath, useInternalNode, type EdgeProps } from '@xyflow/react';
-import type { Part } from '../../../shared/sheet';
 import { pinPosition, snapToGrid } from '../symbols/geometry';
-import { SIDE_TO_HANDLE, type WireFlowEdge } from './flowAdapter';
+import { SIDE_TO_HANDLE, type PartFlowNode, type WireFlowEdge } from './flowAdapter';
 
-function pinOf(node: ReturnType<typeof useInternalNode>, pin: string | null | undefined) {
-  const part = (node?.data as { part?: Part } | undefined)?.part;
-  if (!part || !pin) return null;
-  return pinPosition(part.type, pin, part.position ?? { x: 0, y: 0 }, part.rotation ?? 0) ?? null;
+function pinOf(node: ReturnType<typeof useInternalNode<PartFlowNode>>, pin: string | null | undefined) {
+  const d = node?.data;
+  if (!d || !pin) return null;
+  return pinPosition(d.type, pin, d.position, d.rotation) ?? null;
 }
 
 function WireEdgeView({ id, source, target, sourceHandleId, targetHandleId, selected }: EdgeProps<WireFlowEdge>) {
   // Pin positions come from the document (exact), not from measured handle boxes.
-  const a = pinOf(useInternalNode(source), sourceHandleId);
-  const b = pinOf(useInternalNode(target), targetHandleId);
+  const a = pinOf(useInternalNode<PartFlowNode>(source), sourceHandleId);
+  const b = pinOf(useInternalNode<PartFlowNode>(target), targetHandleId);
   if (!a || !b) return null;
   const [path] = getSmoothStepPath({
     sourceX: a.x,

@@ -1,5 +1,6 @@
 // The parts palette: every part type, grouped, drawn with its own symbol. Click to place (then
 // click on the canvas), or drag onto the canvas; number keys arm the common ones.
+import { memo } from 'react';
 import type { PartType } from '../../../shared/parts/specs';
 import { partSpecs } from '../../../shared/parts/specs';
 import { useEditor, useEditorState } from '../EditorContext';
@@ -28,7 +29,7 @@ export function paletteLabel(type: PartType): string {
   return SHORT[type] ?? partSpecs[type].label;
 }
 
-export function Palette() {
+export const Palette = memo(function Palette() {
   const editor = useEditor();
   const tool = useEditorState((s) => s.session.tool);
   const readOnly = useEditorState((s) => s.session.readOnly);
@@ -80,4 +81,4 @@ export function Palette() {
       </p>
     </nav>
   );
-}
+});

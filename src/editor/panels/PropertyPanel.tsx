@@ -105,8 +105,9 @@ export function PropertyPanel() {
   const editor = useEditor();
   const selection = useEditorState((s) => s.session.selection);
   const parts = useEditorState((s) => s.doc.parts);
-  const warnings = useSolveState((s) => s.byPart);
   const selected = parts.filter((p) => selection.parts.includes(p.id));
+  // this part's findings only (kept as the same array while they do not change)
+  const partWarnings = useSolveState((s) => (selected.length === 1 ? s.byPart[selected[0].id] : undefined));
 
   if (selected.length === 0)
     return (
@@ -148,7 +149,7 @@ export function PropertyPanel() {
         </div>
         {spec.params.some((p) => p.unit === 'Ω' && !p.toleranceOf) && <SeriesPicker />}
       </header>
-      {warnings[part.id]?.length ? <WarningList warnings={warnings[part.id]} compact /> : null}
+      {partWarnings?.length ? <WarningList warnings={partWarnings} compact /> : null}
       {part.type === 'potentiometer' && (
         <div>
           <div className="mb-1 text-[12px] text-ink-muted">Wiper</div>

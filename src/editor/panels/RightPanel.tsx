@@ -1,5 +1,5 @@
 // The right-hand panel: built-in tabs plus any registered by tools (extensions.ts).
-import { useMemo, type ReactNode } from 'react';
+import { memo, useMemo, type ReactNode } from 'react';
 import { useExtensionRegistry, type PanelTab } from '../extensions';
 import { useEditorUi } from '../uiState';
 import { useSolveState } from '../EditorContext';
@@ -29,7 +29,7 @@ const BUILT_IN: PanelTab[] = [
   { id: 'readings', label: 'Readings', order: 40, render: () => <ReadingsTable /> },
 ];
 
-export function RightPanel() {
+export const RightPanel = memo(function RightPanel() {
   const extra = useExtensionRegistry((s) => s.tabs);
   const tabs = useMemo(() => [...BUILT_IN, ...extra].sort((a, b) => a.order - b.order), [extra]);
   const active = useEditorUi((s) => s.activeTab);
@@ -66,4 +66,4 @@ export function RightPanel() {
       </div>
     </aside>
   );
-}
+});

@@ -1,19 +1,27 @@
 // One line under the canvas: solve state, findings, what is selected, what the tool does.
+import { memo } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { useEditorState, useSolveState } from '../EditorContext';
 import { useEditorUi } from '../uiState';
 import { paletteLabel } from './Palette';
 
-export function StatusBar() {
+export const StatusBar = memo(function StatusBar() {
+  // only what the line shows (ms rounded), so a new operating point rarely re-renders it
   const live = useSolveState(
-    useShallow((s) => ({ status: s.status, busy: s.busy, ms: s.ms, n: s.warnings.length, nets: s.result ? Object.keys(s.result.nets).length : 0 })),
+    useShallow((s) => ({
+      status: s.status,
+      busy: s.busy,
+      ms: s.ms === null ? null : s.ms < 1 ? '<1' : String(Math.round(s.ms)),
+      n: s.warnings.length,
+      nets: s.result ? Object.keys(s.result.nets).length : 0,
+    })),
   );
   const tool = useEditorState((s) => s.session.tool);
   const sel = useEditorState((s) => s.session.selection);
   const parts = useEditorState((s) => s.doc.parts.length);
   const openTab = useEditorUi((s) => s.openTab);
   const solve =
-    live.status === 'idle' ? (parts ? 'Solving…' : 'Nothing to solve yet') : live.status === 'error' ? 'Cannot solve' : `Solved · ${live.nets} nets${live.ms !== null ? ` · ${live.ms < 1 ? '<1' : Math.round(live.ms)} ms` : ''}`;
+    live.status === 'idle' ? (parts ? 'Solving…' : 'Nothing to solve yet') : live.status === 'error' ? 'Cannot solve' : `Solved · ${live.nets} nets${live.ms !== null ? ` · ${live.ms} ms` : ''}`;
   return (
     <div className="flex h-7 shrink-0 items-center gap-3 border-t border-rule bg-panel px-3 text-[11px] text-ink-muted" data-testid="status-bar">
       <span className={live.status === 'error' ? 'font-medium text-danger' : ''} data-testid="solve-status" aria-live="polite">
@@ -34,4 +42,4 @@ export function StatusBar() {
       </span>
     </div>
   );
-}
+});

@@ -1,5 +1,6 @@
 // The editor toolbar: sheet title and save state, edit and view commands, the examples menu, and
 // a slot for tools registered by other modules (extensions.ts).
+import { memo } from 'react';
 import { Link } from 'react-router-dom';
 import { useReactFlow } from '@xyflow/react';
 import { useEditor, useEditorState } from '../EditorContext';
@@ -53,7 +54,7 @@ function Btn({ label, onClick, disabled, children, pressed, testId }: { label: s
 
 const Sep = () => <span className="mx-1 h-5 w-px bg-rule" aria-hidden="true" />;
 
-export function Toolbar({ title, notice, status }: { title: string; notice?: string; status: SaveStatus }) {
+export const Toolbar = memo(function Toolbar({ title, notice, status }: { title: string; notice?: string; status: SaveStatus }) {
   const editor = useEditor();
   const rf = useReactFlow();
   const history = useEditorState((s) => s.history);
@@ -129,4 +130,4 @@ export function Toolbar({ title, notice, status }: { title: string; notice?: str
       </div>
     </div>
   );
-}
+});

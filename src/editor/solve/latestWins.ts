@@ -1,8 +1,10 @@
 // Keeps the solver busy with only the newest sheet: while one solve runs, later requests replace
 // each other, and a result that is no longer the newest is dropped. If a solve takes far too long
 // while edits are waiting, the worker is thrown away and a fresh one takes the newest sheet, so a
-// pathological circuit can never leave the readings stuck behind the drawing.
+// pathological circuit can never leave the readings stuck behind the drawing. An inline solver
+// (inlineSolver.ts), when given, answers small sheets at once on the calling thread.
 import type { Sheet } from '../../../shared/sheet';
+import type { InlineSolver } from './inlineSolver';
 import type { SolveResult } from './resultTypes';
 
 export interface SolverPort {
@@ -17,9 +19,13 @@ export interface SolverHandle {
 export interface SolveOutcome {
   /** sequence number of the request this answers (the newest at the time it arrives) */
   seq: number;
+  /** the sheet that was solved */
+  sheet: Sheet;
   result: SolveResult;
-  /** wall time of the solve, ms */
+  /** wall time of the solve, ms (for the worker: request to answer) */
   ms: number;
+  /** where it was solved: on the calling thread (inline) or in the worker */
+  where: 'inline' | 'worker';
 }
 
 export interface LatestWinsOptions {
@@ -28,6 +34,8 @@ export interface LatestWinsOptions {
   now?: () => number;
   onResult(outcome: SolveOutcome): void;
   onBusy?(busy: boolean): void;
+  /** solves small sheets synchronously inside request(); the worker takes what it declines */
+  inline?: InlineSolver;
 }
 
 export class LatestWinsSolver {
@@ -39,6 +47,7 @@ export class LatestWinsSolver {
   private disposed = false;
   private readonly stallMs: number;
   private readonly now: () => number;
+  private inline: InlineSolver | null;
 
   constructor(
     private readonly makeHandle: () => SolverHandle,
@@ -47,11 +56,26 @@ export class LatestWinsSolver {
     this.handle = makeHandle();
     this.stallMs = options.stallMs ?? 3000;
     this.now = options.now ?? (() => performance.now());
+    this.inline = options.inline ?? null;
   }
 
-  /** Ask for a solve of `sheet`; returns its sequence number. */
+  /** Use `inline` for the sheets it accepts from now on (null: the worker for everything). */
+  setInline(inline: InlineSolver | null): void {
+    this.inline = inline;
+  }
+
+  /**
+   * Ask for a solve of `sheet`; returns its sequence number. An inline solve delivers its result
+   * before this returns; a worker solve still running then is stale and its answer is dropped.
+   */
   request(sheet: Sheet): number {
     const seq = ++this.latest;
+    const now = this.inline?.trySolve(sheet);
+    if (now) {
+      this.pending = null;
+      this.options.onResult({ seq, sheet, result: now.result, ms: now.ms, where: 'inline' });
+      return seq;
+    }
     this.pending = { seq, sheet };
     if (!this.inFlight) this.runPending();
     else if (this.now() - this.inFlight.started > this.stallMs) this.restart();
@@ -86,7 +110,7 @@ export class LatestWinsSolver {
     const settle = (result: SolveResult) => {
       if (this.disposed || generation !== this.generation) return; // from a worker we abandoned
       this.inFlight = null;
-      if (job.seq === this.latest) this.options.onResult({ seq: job.seq, result, ms: this.now() - started });
+      if (job.seq === this.latest) this.options.onResult({ seq: job.seq, sheet: job.sheet, result, ms: this.now() - started, where: 'worker' });
       this.runPending();
     };
     this.handle.port.solve(job.sheet).then(settle, (e: unknown) =>

@@ -1,11 +1,14 @@
 // Re-solves the sheet after every electrical change (not after pure layout moves), latest-wins,
-// and publishes a SolveView into a small store of its own.
+// and publishes a SolveView into a small store of its own. Small sheets are solved inline (in the
+// edit's own task, see inlineSolver.ts), the rest in the worker.
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Sheet } from '../../../shared/sheet';
 import type { Editor } from '../store/actions';
 import { applyCorners } from './corners';
+import type { InlineSolver } from './inlineSolver';
 import { LatestWinsSolver, type SolverHandle } from './latestWins';
-import { buildSolveView, emptySolveView, type SolveView } from './solveView';
+import { buildSolveView, createTopologyCache, emptySolveView, type SolveView } from './solveView';
+import { shareView } from './viewSharing';
 
 export interface LiveSolveState extends SolveView {
   /** a solve is running */
@@ -26,18 +29,35 @@ export interface LiveSolve {
   dispose(): void;
 }
 
-/** Start solving `editor`'s sheet in `makeHandle`'s worker; stops on dispose(). */
-export function startLiveSolve(editor: Editor, makeHandle: () => SolverHandle): LiveSolve {
+export interface LiveSolveOptions {
+  /**
+   * Solves small sheets on this thread (createInlineSolver); a promise while the engine module
+   * loads, the worker solving until then. Without it everything goes to the worker.
+   */
+  inline?: InlineSolver | Promise<InlineSolver>;
+}
+
+/** Start solving `editor`'s sheet (inline or in `makeHandle`'s worker); stops on dispose(). */
+export function startLiveSolve(editor: Editor, makeHandle: () => SolverHandle, options: LiveSolveOptions = {}): LiveSolve {
   const store = createStore<LiveSolveState>(() => ({ ...emptySolveView, busy: false }));
-  const sent = new Map<number, Sheet>();
+  const topology = createTopologyCache();
+  let disposed = false;
   const solver = new LatestWinsSolver(makeHandle, {
-    onBusy: (busy) => store.setState({ busy }),
-    onResult: ({ seq, result, ms }) => {
-      const sheet = sent.get(seq);
-      for (const k of [...sent.keys()]) if (k <= seq) sent.delete(k);
-      if (sheet) store.setState({ ...buildSolveView(sheet, result, ms) });
+    onBusy: (busy) => {
+      if (store.getState().busy !== busy) store.setState({ busy });
+    },
+    onResult: ({ sheet, result, ms }) => {
+      const prev = store.getState();
+      store.setState({ ...shareView(prev, buildSolveView(sheet, result, ms, topology(sheet))) });
     },
   });
+  const inline = options.inline;
+  if (inline instanceof Promise)
+    inline.then(
+      (s) => !disposed && solver.setInline(s),
+      () => {}, // the engine chunk did not load: the worker keeps every solve, which is fine
+    );
+  else if (inline) solver.setInline(inline);
   let lastKey = '';
   const maybeSolve = () => {
     const { doc, session } = editor.store.getState();
@@ -50,7 +70,7 @@ export function startLiveSolve(editor: Editor, makeHandle: () => SolverHandle): 
       store.setState({ ...emptySolveView, busy: false });
       return;
     }
-    sent.set(solver.request(input), input);
+    solver.request(input);
   };
   const unsubscribe = editor.store.subscribe((s, prev) => {
     if (s.doc !== prev.doc || s.session.corners !== prev.session.corners) maybeSolve();
@@ -59,6 +79,7 @@ export function startLiveSolve(editor: Editor, makeHandle: () => SolverHandle): 
   return {
     store,
     dispose() {
+      disposed = true;
       unsubscribe();
       solver.dispose();
     },

@@ -62,9 +62,34 @@ export function tagPins(sheet: Sheet): Record<string, string> {
   return out;
 }
 
+/** What the view needs from the sheet's wiring alone (the same for every value the parts take). */
+export interface SheetTopology {
+  /** pin → net name, for every pin */
+  pinNets: Record<string, string>;
+  /** tagged pin → its net (tagPins) */
+  tagPins: Record<string, string>;
+}
+
+export function sheetTopology(sheet: Sheet): SheetTopology {
+  return { pinNets: extractNets(sheet).pinToNet, tagPins: tagPins(sheet) };
+}
+
+/**
+ * sheetTopology, remembered for the last wiring: a value change (a slider pull) reuses the
+ * previous answer, and with it the same pinNets object, so whatever depends on it stays put.
+ */
+export function createTopologyCache(): (sheet: Sheet) => SheetTopology {
+  let last: { key: string; topo: SheetTopology } | null = null;
+  return (sheet) => {
+    // net labels name nets through their `name` param
+    const key = JSON.stringify([sheet.parts.map((p) => [p.id, p.type, (p.params as { name?: unknown }).name]), sheet.wires.map((w) => [w.from, w.to])]);
+    if (last?.key !== key) last = { key, topo: sheetTopology(sheet) };
+    return last.topo;
+  };
+}
+
 /** Build the view from a solved sheet and the engine's answer. */
-export function buildSolveView(sheet: Sheet, result: SolveResult, ms: number | null): SolveView {
-  const nets = extractNets(sheet);
+export function buildSolveView(sheet: Sheet, result: SolveResult, ms: number | null, topology: SheetTopology = sheetTopology(sheet)): SolveView {
   const success = result.ok ? result : null;
   const warnings = [...(result.ok ? result.warnings : (result.warnings ?? [])), ...safetyCautions(sheet, success)];
   // the same finding can arrive at part and sheet level; keep one
@@ -82,7 +107,7 @@ export function buildSolveView(sheet: Sheet, result: SolveResult, ms: number | n
   if (!result.ok) for (const id of result.error.parts ?? []) (byPart[id] ??= []).unshift({ code: result.error.code, severity: 'error', partId: id, message: result.error.message });
   const tags: Record<string, NetTag> = {};
   if (success)
-    for (const [pin, net] of Object.entries(tagPins(sheet))) {
+    for (const [pin, net] of Object.entries(topology.tagPins)) {
       const volts = success.nets[net];
       if (typeof volts === 'number') tags[pin] = { net, volts };
     }
@@ -93,7 +118,7 @@ export function buildSolveView(sheet: Sheet, result: SolveResult, ms: number | n
     warnings: unique,
     byPart,
     tags,
-    pinNets: nets.pinToNet,
+    pinNets: topology.pinNets,
     ms,
   };
 }

@@ -1,13 +1,17 @@
-// The engine, off the main thread: the canvas stays responsive however long a solve takes.
+// The engine, off the main thread: the canvas stays responsive however long a solve takes. Edits
+// that change only values reuse the compiled circuit (incrementalSolve.ts).
 import { expose } from 'comlink';
-import { solveOperatingPoint } from '../../../shared/engine';
+import { compileCircuit, solveOperatingPoint } from '../../../shared/engine';
 import type { Sheet } from '../../../shared/sheet';
+import { createIncrementalSolver } from './incrementalSolve';
 import type { SolveResult } from './resultTypes';
+
+const solver = createIncrementalSolver({ compileCircuit, solveOperatingPoint });
 
 const api = {
   /** DC operating point of `sheet` (the contract's result shape). */
   solve(sheet: Sheet): SolveResult {
-    return solveOperatingPoint(sheet);
+    return solver.solve(sheet);
   },
 };
 

@@ -120,17 +120,30 @@ export function createEditorStore(initial: Sheet): EditorStore {
     return { canUndo: d.past > 0, canRedo: d.future > 0, undoLabel: history.undoLabel, redoLabel: history.redoLabel };
   };
 
-  /** Set the new document and drop session references to parts/wires that no longer exist. */
+  const sameHistory = (a: HistoryState, b: HistoryState) =>
+    a.canUndo === b.canUndo && a.canRedo === b.canRedo && a.undoLabel === b.undoLabel && a.redoLabel === b.redoLabel;
+
+  /**
+   * Set the new document and drop session references to parts/wires that no longer exist. Slices
+   * that did not change keep their objects (a slider step must not re-render everything that
+   * reads the selection or the undo state).
+   */
   const commitDoc = (next: DocumentState) => {
     store.setState((s) => {
       s.doc = next as Draft<DocumentState>;
       s.docRevision += 1;
-      s.history = historyState();
-      const partIds = new Set(next.parts.map((p) => p.id));
-      const wireIds = new Set(next.wires.map((w) => w.id));
-      s.session.selection.parts = s.session.selection.parts.filter((id) => partIds.has(id));
-      s.session.selection.wires = s.session.selection.wires.filter((id) => wireIds.has(id));
-      for (const id of Object.keys(s.session.corners)) if (!partIds.has(id)) delete s.session.corners[id];
+      const h = historyState();
+      if (!sameHistory(s.history, h)) s.history = h;
+      const { selection, corners } = s.session;
+      if (selection.parts.length || Object.keys(corners).length) {
+        const partIds = new Set(next.parts.map((p) => p.id));
+        if (selection.parts.some((id) => !partIds.has(id))) selection.parts = selection.parts.filter((id) => partIds.has(id));
+        for (const id of Object.keys(corners)) if (!partIds.has(id)) delete corners[id];
+      }
+      if (selection.wires.length) {
+        const wireIds = new Set(next.wires.map((w) => w.id));
+        if (selection.wires.some((id) => !wireIds.has(id))) selection.wires = selection.wires.filter((id) => wireIds.has(id));
+      }
     });
   };
 
@@ -221,7 +234,8 @@ export function createEditorStore(initial: Sheet): EditorStore {
 
     endGesture() {
       history.end();
-      store.setState((s) => void (s.history = historyState()));
+      const h = historyState();
+      if (!sameHistory(store.getState().history, h)) store.setState((s) => void (s.history = h));
     },
 
     loadDocument(sheet, options = {}) {
