@@ -125,16 +125,21 @@ function envFor(part: Part, params: Record<string, unknown>, cond: { temperature
   return { temperatureC: tC, temperatureK: tK, vt: thermalVoltage(tK), illuminanceLux: lux };
 }
 
-function valueText(part: Part, params: Record<string, unknown>): string | undefined {
+/** How a part that takes part in a loop of ideal constraints is described in the message. */
+function valueText(part: Part, params: Record<string, unknown>, edges: TopologyEdge[]): string | undefined {
   switch (part.type) {
     case 'dc_voltage_source':
       return fmt(params.voltage as number, 'V');
     case 'switch':
       return 'closed, 0 Ω';
-    case 'potentiometer':
-      return `wiper at ${(params.position as number) <= 0 ? 'a' : 'b'}, 0 Ω`;
+    case 'potentiometer': {
+      // which section is the 0 Ω link decides where the wiper sits (a log taper reaches 0 before position 0)
+      const awLink = edges[0]?.kind === 'voltage';
+      return `wiper at ${awLink ? 'a' : 'b'}, 0 Ω`;
+    }
     default:
-      return undefined;
+      // any other part whose resistance came out below 1 µΩ is an ideal link
+      return edges.some((e) => e.kind === 'voltage') ? 'below 1 µΩ, an ideal 0 Ω link' : undefined;
   }
 }
 
@@ -230,7 +235,7 @@ function instantiate(
     const pinNets = def.pins.map((p) => nets.pinToIndex.get(pinKey(part.id, p.name))!);
     const edges: TopologyEdge[] = def.model.topology(params, env);
     topoById.set(part.id, edges);
-    const vt = valueText(part, params);
+    const vt = valueText(part, params, edges);
     topo.push({ partId: part.id, type: part.type, pinNets, edges, ...(vt ? { valueText: vt } : {}) });
   }
   if (issues.length)
@@ -503,7 +508,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
       if ('ok' in prep) return prep;
       const { inst, cond } = prep;
       const outcome = runStrategies(inst.circuit, initialVector(inst, so.initialGuess), opts);
-      if (!outcome.ok) return failure(describeFailure(outcome, inst, base), base.staticWarnings);
+      if (!outcome.ok) return { ...failure(describeFailure(outcome, inst, base), base.staticWarnings), iterations: outcome.iterations };
       for (let i = 0; i < outcome.x.length; i++)
         if (!Number.isFinite(outcome.x[i])) return failure({ code: 'non_finite', message: 'The solve produced a value that is not a finite number. Check for extreme parameter values.', parts: [], nets: [] }, base.staticWarnings);
       last = { inst, x: outcome.x, gmin: outcome.gminUsed, iterations: outcome.iterations, strategy: outcome.strategy, cond };
@@ -595,7 +600,13 @@ interface StrategyOutcomeFail {
   singular?: number[];
   tried: string[];
   exhausted: boolean;
+  /** the only solution found balances through the junction gmin, which carries this much (A) */
+  gminCarries?: number;
+  gminSolution?: Float64Array;
 }
+
+/** A gmin solution whose gmin currents exceed this (A) is no operating point (see finish()). */
+const GMIN_CARRY_LIMIT = 1e-9;
 
 function runStrategies(c: MnaCircuit, x0: Float64Array, opts: typeof DEFAULTS): StrategyOutcomeOk | StrategyOutcomeFail {
   let total = 0;
@@ -607,19 +618,35 @@ function runStrategies(c: MnaCircuit, x0: Float64Array, opts: typeof DEFAULTS): 
   };
   const gmin = opts.gmin;
   const tried: string[] = ['Newton–Raphson'];
+  c.resetScaling();
   const first = run(x0, { gmin, sourceScale: 1, shunt: 0 });
   let best: NewtonOutcome = first;
   let singular = first.singular;
-  const finish = (x: Float64Array, strategy: SolveStrategy): StrategyOutcomeOk => {
+  const finish = (x: Float64Array, strategy: SolveStrategy): StrategyOutcomeOk | StrategyOutcomeFail => {
     // polish without the junction gmin so results are those of the exact device equations
     if (c.nonlinear && gmin > 0 && budgetLeft() > 0) {
       const p = run(x, { gmin: 0, sourceScale: 1, shunt: 0 }, 30);
       if (p.converged) return { ok: true, x: p.x, iterations: total, strategy, gminUsed: 0 };
+      // The gmin solution may stand only where gmin merely picks among equally valid answers (a
+      // node held by reverse-biased junctions alone, whose exact conductance underflows). When
+      // it carries real current (a current source into a blocking junction: 1 mA through
+      // 1e-12 S at 1e9 V) there is no operating point at all.
+      const share = c.gminShare(x, gmin);
+      if (share.gminAmps > Math.max(GMIN_CARRY_LIMIT, 1e-6 * share.scaleAmps))
+        return { ok: false, iterations: total, last: { ...p, x, prev: x }, tried, exhausted: false, gminCarries: share.gminAmps, gminSolution: x };
     }
     return { ok: true, x, iterations: total, strategy, gminUsed: c.nonlinear ? gmin : 0 };
   };
   if (first.converged) return finish(first.x, c.nonlinear ? 'newton' : 'direct');
   if (!c.nonlinear) return { ok: false, iterations: total, last: first, ...(singular ? { singular } : {}), tried, exhausted: false };
+
+  // a constant-power load asking more than its supply can give has no operating point above its
+  // minVoltage; from the power-up start Newton then wanders, while loads drawing from 0 V find the
+  // undervoltage point at once
+  if (c.hasPowerUpStart && x0.every((v) => v === 0) && budgetLeft() > 0) {
+    const r = run(x0, { gmin, sourceScale: 1, shunt: 0, loadsOnAtStart: true });
+    if (r.converged) return finish(r.x, 'newton');
+  }
 
   // gmin stepping: a shunt from every node to ground, reduced step by step
   if (opts.gminStepping && budgetLeft() > 0) {
@@ -680,6 +707,36 @@ function unknownName(base: BaseInfo, i: number): string | null {
 }
 
 function describeFailure(o: StrategyOutcomeFail, inst: Instance, base: BaseInfo): SolveErrorInfo {
+  if (o.gminCarries !== undefined && o.gminSolution) {
+    const x = o.gminSolution;
+    // the nets with the most extreme voltages are where the current has nowhere to go
+    const nets: Array<{ net: string; v: number }> = [];
+    base.nets.nets.forEach((net, k) => {
+      const u = base.netUnknown[k];
+      if (u >= 0) nets.push({ net: net.name, v: x[u] });
+    });
+    nets.sort((a, b) => Math.abs(b.v) - Math.abs(a.v));
+    const top = nets.slice(0, 3);
+    const hot = new Set(top.map((n) => base.netUnknown[base.nets.byName.get(n.net)!.index]));
+    const parts = inst.devices.filter((d) => d.nonlinear && d.nodes.some((nd) => hot.has(nd))).map((d) => d.partId).slice(0, 6);
+    return {
+      code: 'no_convergence',
+      message: `There is no operating point: the current into ${top.length ? `net "${top[0].net}"` : 'the circuit'} can only flow through ${parts.length ? parts.join(', ') : 'a junction'} in the direction ${parts.length > 1 ? 'they block' : 'it blocks'} (the equations balance only through the solver's 1e-12 S helper conductance, at ${fmt(top[0]?.v ?? 0, 'V')}). A current source feeding a reverse-biased diode or transistor junction does this: give the current another path, or turn the part around.`,
+      parts,
+      nets: top.map((n) => n.net),
+    };
+  }
+  if (o.last.nonFinite) {
+    const bad = new Set(o.last.nonFinite);
+    const nets = o.last.nonFinite.map((u) => unknownName(base, u)).filter((x): x is string => !!x).slice(0, 6);
+    const parts = inst.devices.filter((d) => d.nodes.some((nd) => bad.has(nd))).map((d) => d.partId).slice(0, 6);
+    return {
+      code: 'non_finite',
+      message: `The solve produced a voltage or current too large for a number (beyond 1.8e308)${nets.length ? ` at ${nets.map((n) => `"${n}"`).join(', ')}` : ''}${parts.length ? ` (parts ${parts.join(', ')})` : ''}. Check for extreme parameter values, such as a huge current source driving a huge resistance.`,
+      parts,
+      nets,
+    };
+  }
   if (o.singular && (!inst.circuit.nonlinear || o.last.singular)) {
     const nets = o.singular.map((u) => unknownName(base, u)).filter((x): x is string => !!x);
     const parts = new Set<string>();
@@ -716,6 +773,15 @@ function describeFailure(o: StrategyOutcomeFail, inst: Instance, base: BaseInfo)
   };
 }
 
+/**
+ * rec[key] = value as an own property even for the key "__proto__" (a legal part id and net label),
+ * where plain assignment would replace the record's prototype and lose the value.
+ */
+function setOwn<T>(rec: Record<string, T>, key: string, value: T): void {
+  if (key === '__proto__') Object.defineProperty(rec, key, { value, enumerable: true, writable: true, configurable: true });
+  else rec[key] = value;
+}
+
 function assemble(
   base: BaseInfo,
   inst: Instance,
@@ -729,7 +795,7 @@ function assemble(
   base.nets.nets.forEach((net, i) => {
     if (!base.active[i]) return;
     const u = base.netUnknown[i];
-    nets[net.name] = u < 0 ? 0 : x[u] === 0 ? 0 : x[u];
+    setOwn(nets, net.name, u < 0 ? 0 : x[u] === 0 ? 0 : x[u]);
   });
   const pins: Record<string, number> = {};
   const parts: Record<string, PartResult> = {};
@@ -739,7 +805,7 @@ function assemble(
     const def = partCatalog[part.type];
     const partWarnings: SolveWarning[] = base.staticWarnings.filter((w) => w.partId === part.id);
     if (base.excluded.has(part.id)) {
-      parts[part.id] = { pinCurrents: Object.fromEntries(def.pins.map((p) => [p.name, 0])), power: 0, warnings: partWarnings };
+      setOwn(parts, part.id, { pinCurrents: Object.fromEntries(def.pins.map((p) => [p.name, 0])), power: 0, warnings: partWarnings });
       continue;
     }
     const pv = def.pins.map((p) => {
@@ -762,7 +828,7 @@ function assemble(
     if (!pi.every(Number.isFinite) || !Number.isFinite(power)) bad.push(part.id);
     const derived = rep?.derived;
     if (derived) for (const v of Object.values(derived)) if (typeof v === 'number' && !Number.isFinite(v)) bad.push(part.id);
-    parts[part.id] = { pinCurrents, power: power === 0 ? 0 : power, warnings: partWarnings, ...(derived ? { derived } : {}) };
+    setOwn(parts, part.id, { pinCurrents, power: power === 0 ? 0 : power, warnings: partWarnings, ...(derived ? { derived } : {}) });
   }
   const badNets = Object.entries(nets).filter(([, v]) => !Number.isFinite(v)).map(([k]) => k);
   if (bad.length || badNets.length)

@@ -83,13 +83,23 @@ export interface DeviceReport {
   warnings?: DeviceWarning[];
 }
 
+/**
+ * How a Newton solve starts. 'warm': from an earlier solution. 'cold' (x all zeros): junctions at
+ * their critical voltage and constant-power loads open, as a real circuit powers up. 'cold-loads-on':
+ * the same but loads drawing from the start, the fallback when the power-up start fails (a load
+ * asking more than its supply can give has no operating point above its minVoltage).
+ */
+export type StartKind = 'warm' | 'cold' | 'cold-loads-on';
+
 export interface Device {
   readonly partId: string;
   readonly nonlinear: boolean;
+  /** true when the device starts differently from a 'cold' and a 'cold-loads-on' start */
+  readonly startsOpen?: boolean;
   /** every unknown node the device touches (pins and internal nodes), for movement reporting */
   readonly nodes: readonly number[];
-  /** start of a Newton solve from x (resets junction-limiting memory) */
-  begin?(x: Float64Array): void;
+  /** Start of a Newton solve from x (resets junction-limiting memory); see StartKind. */
+  begin?(x: Float64Array, start: StartKind): void;
   /** stamp the companion model at iterate x */
   load(s: Stamper, x: Float64Array): void;
   /** add the true currents at x (with the given junction gmin and source scale) to the residual */

@@ -4,17 +4,49 @@
 // Massobrio & Antognetti, "Semiconductor Device Modeling with SPICE", 2nd ed., 1993).
 import { NOMINAL_TEMPERATURE_K, thermalVoltage } from './constants';
 
-/** Above this exponent exp() continues linearly, so a wild Newton iterate cannot overflow. */
+/**
+ * Exponents up to at least this continue as exp(); above the junction's own limit exp() continues
+ * linearly (value and slope continuous), so a wild Newton iterate cannot overflow.
+ */
 export const EXP_LIMIT = 80;
-const EXP_AT_LIMIT = Math.exp(EXP_LIMIT);
+/** The linear continuation never starts later than this (e^700 ≈ 1e304 still fits a double). */
+export const MAX_EXP_LIMIT = 700;
+/**
+ * A junction follows the exact exponential up to at least this current (A). With a tiny saturation
+ * current (a wide-bandgap LED with n = 1, any junction far below 0 °C) e^80·I_S is far below the
+ * circuit's current, so a fixed limit of 80 would replace the real diode by a weak linear one and
+ * give a wrong operating point (hard case 17 in tests/fixtures/hard-circuits).
+ */
+export const JUNCTION_CURRENT_CEILING = 1e12;
 
-/** exp(u) for u ≤ EXP_LIMIT, continued linearly above (value and slope continuous). */
-export function limexp(u: number): number {
-  return u <= EXP_LIMIT ? Math.exp(u) : EXP_AT_LIMIT * (1 + u - EXP_LIMIT);
+/** Where an exponential of scale `scale` (A) switches to its linear continuation. */
+export interface ExpLimit {
+  /** exponent at which the continuation starts */
+  u: number;
+  /** e^u */
+  e: number;
+}
+
+/** The exponent limit for a junction term scale·e^u: exact up to JUNCTION_CURRENT_CEILING. */
+export function expLimitFor(scale: number): ExpLimit {
+  const wanted = Math.log(JUNCTION_CURRENT_CEILING / scale);
+  const u = Math.min(MAX_EXP_LIMIT, Math.max(EXP_LIMIT, Number.isFinite(wanted) ? wanted : MAX_EXP_LIMIT));
+  return { u, e: Math.exp(u) };
+}
+
+const DEFAULT_LIMIT: ExpLimit = { u: EXP_LIMIT, e: Math.exp(EXP_LIMIT) };
+
+/** exp(u) for u ≤ lim.u, continued linearly above (value and slope continuous). */
+export function limexp(u: number, lim: ExpLimit = DEFAULT_LIMIT): number {
+  return u <= lim.u ? Math.exp(u) : lim.e * (1 + u - lim.u);
+}
+/** limexp(u) − 1 without the cancellation of exp(u) − 1 near u = 0 (it matters when I_S is large). */
+export function limexpm1(u: number, lim: ExpLimit = DEFAULT_LIMIT): number {
+  return u <= lim.u ? Math.expm1(u) : lim.e * (1 + u - lim.u) - 1;
 }
 /** d/du limexp(u) */
-export function dlimexp(u: number): number {
-  return u <= EXP_LIMIT ? Math.exp(u) : EXP_AT_LIMIT;
+export function dlimexp(u: number, lim: ExpLimit = DEFAULT_LIMIT): number {
+  return u <= lim.u ? Math.exp(u) : lim.e;
 }
 
 /** Critical voltage of a junction: beyond it steps are limited logarithmically. */
@@ -57,11 +89,22 @@ export function scaleSaturationCurrent(is25: number, temperatureK: number, n: nu
  * A junction with optional reverse breakdown, as used by the diode, the Zener and the LED:
  *   i(v) = I_S·(e^{v/(n·V_T)} − 1) − I_B·(e^{−(v+B)/a} − e^{−B/a}) + gmin·v
  * where the breakdown term (absent when B is undefined) passes I_B at v = −B with slope I_B/a.
+ * Build it with `junctionParams` so the exponent limits match the scales.
  */
 export interface JunctionParams {
   is: number;
   nvt: number;
-  breakdown?: { voltage: number; current: number; slope: number };
+  lim: ExpLimit;
+  breakdown?: { voltage: number; current: number; slope: number; lim: ExpLimit };
+}
+
+export function junctionParams(is: number, nvt: number, breakdown?: { voltage: number; current: number; slope: number }): JunctionParams {
+  return {
+    is,
+    nvt,
+    lim: expLimitFor(is),
+    ...(breakdown ? { breakdown: { ...breakdown, lim: expLimitFor(breakdown.current) } } : {}),
+  };
 }
 
 export interface JunctionEval {
@@ -71,13 +114,13 @@ export interface JunctionEval {
 
 export function junctionCurrent(p: JunctionParams, v: number, gmin: number): JunctionEval {
   const u = v / p.nvt;
-  let i = p.is * (limexp(u) - 1);
-  let g = (p.is / p.nvt) * dlimexp(u);
+  let i = p.is * limexpm1(u, p.lim);
+  let g = (p.is / p.nvt) * dlimexp(u, p.lim);
   if (p.breakdown) {
-    const { voltage: bv, current: ib, slope: a } = p.breakdown;
+    const { voltage: bv, current: ib, slope: a, lim } = p.breakdown;
     const w = -(v + bv) / a;
-    i -= ib * (limexp(w) - Math.exp(-bv / a));
-    g += (ib / a) * dlimexp(w);
+    i -= ib * (limexp(w, lim) - Math.exp(-bv / a));
+    g += (ib / a) * dlimexp(w, lim);
   }
   return { i: i + gmin * v, g: g + gmin };
 }

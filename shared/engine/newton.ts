@@ -2,7 +2,7 @@
 // (Nagel 1975, SPICE2; Vladimirescu, "The SPICE Book", 1994): junction limiting (in the device
 // models), gmin in parallel with junctions, gmin stepping with a shunt on every node, source
 // stepping, and convergence on both the step (voltages and branch currents) and the KCL residual.
-import { nodeV, type Device, type ResidualSink, type Stamper } from './device';
+import { nodeV, type Device, type ResidualSink, type Stamper, type StartKind } from './device';
 import type { LinearSystem } from './linear/types';
 
 export interface NewtonTolerances {
@@ -15,6 +15,8 @@ export interface NewtonTolerances {
 }
 
 export const UNKNOWN_NODE = 0;
+/** KCL residuals within this many ulps of a node's current scale count as zero (see `noise`). */
+const ROUNDING_ULPS = 16;
 export const UNKNOWN_BRANCH = 1;
 
 export interface NewtonOutcome {
@@ -24,7 +26,8 @@ export interface NewtonOutcome {
   prev: Float64Array;
   iterations: number;
   singular?: number[];
-  nonFinite?: boolean;
+  /** unknowns whose new value came out NaN or infinite (the iteration was abandoned) */
+  nonFinite?: number[];
 }
 
 export interface NewtonRun {
@@ -33,13 +36,60 @@ export interface NewtonRun {
   /** conductance from every node to ground (gmin stepping), S */
   shunt: number;
   maxIterations: number;
+  /** from all-zero x, let constant-power loads draw from the first iteration (see StartKind) */
+  loadsOnAtStart?: boolean;
 }
 
 /** The assembled circuit the Newton loop works on. */
 export class MnaCircuit {
   readonly nonlinear: boolean;
+  /** some device starts open from a cold start (see StartKind): a 'cold-loads-on' retry may help */
+  readonly hasPowerUpStart: boolean;
   private readonly residualSum: Float64Array;
   private readonly residualMax: Float64Array;
+  /**
+   * Per node, Σ |matrix entry|·|unknown| (+ |rhs|) of the last load: the scale of the rounding in
+   * that node's currents. A node's KCL residual cannot be driven below a few ulps of it, however
+   * exact the solution (a 1 µΩ resistor at 1000 V: 1e6 S·1000 V·2.2e-16 ≈ 2e-7 A of noise).
+   */
+  private readonly noise: Float64Array;
+  /** the iterate being loaded (the stamper weighs entries by it for `noise`) */
+  private loadingAt: Float64Array;
+  /**
+   * Row equilibration: each equation is multiplied by a power of two near 1/(its largest entry in
+   * the previous iteration), which changes no unknown and is exact. Without it a junction forced far
+   * into its exponential by an ideal source (g ≈ 1e16 S beside the source's 1) leaves a pivot of
+   * 1/g, which the linear solvers' relative test takes for a singular matrix (hard case 06).
+   */
+  private readonly rowScale: Float64Array;
+  /** largest |entry| per row in the current load, for the next iteration's rowScale */
+  private readonly rowMax: Float64Array;
+  private scaleReady = false;
+
+  /** Forget the row scales: the next Newton run measures them afresh (call at the start of a solve). */
+  resetScaling(): void {
+    this.rowScale.fill(1);
+    this.scaleReady = false;
+  }
+
+  /**
+   * Largest current (A) that the junction gmin carries into any node at x, and the largest device
+   * current into any node: a gmin solution is only an answer when the first is negligible.
+   */
+  gminShare(x: Float64Array, gmin: number): { gminAmps: number; scaleAmps: number } {
+    const a = new Float64Array(this.size);
+    const b = new Float64Array(this.size);
+    let scale = 0;
+    const sa: ResidualSink = { add: (n, i) => { if (n >= 0) { a[n] += i; scale = Math.max(scale, Math.abs(i)); } } };
+    const sb: ResidualSink = { add: (n, i) => { if (n >= 0) b[n] += i; } };
+    for (const d of this.devices) {
+      d.residual(x, sa, 0, 1);
+      d.residual(x, sb, gmin, 1);
+    }
+    let g = 0;
+    for (let i = 0; i < this.size; i++) if (this.kinds[i] === UNKNOWN_NODE) g = Math.max(g, Math.abs(b[i] - a[i]));
+    return { gminAmps: g, scaleAmps: scale };
+  }
 
   constructor(
     readonly size: number,
@@ -50,12 +100,37 @@ export class MnaCircuit {
     readonly tol: NewtonTolerances,
   ) {
     this.nonlinear = devices.some((d) => d.nonlinear);
+    this.hasPowerUpStart = devices.some((d) => d.startsOpen === true);
     this.residualSum = new Float64Array(size);
     this.residualMax = new Float64Array(size);
+    this.noise = new Float64Array(size);
+    this.loadingAt = new Float64Array(size);
+    this.rowScale = new Float64Array(size).fill(1);
+    this.rowMax = new Float64Array(size);
   }
 
-  private stamper(run: NewtonRun, flag: { limited: boolean }): Stamper {
-    const sys = this.system;
+  /** Scales for the next iteration from this iteration's row maxima (powers of two: exact). */
+  private updateRowScale(): void {
+    for (let i = 0; i < this.size; i++) {
+      const m = this.rowMax[i];
+      this.rowScale[i] = m > 0 && Number.isFinite(m) ? Math.pow(2, -Math.round(Math.log2(m))) : 1;
+    }
+  }
+
+  private stamper(run: NewtonRun, flag: { limited: boolean }, sys: Pick<LinearSystem, 'add' | 'addRhs'> = this.system): Stamper {
+    const noise = this.noise;
+    const rowScale = this.rowScale;
+    const rowMax = this.rowMax;
+    // every entry goes in scaled by its row's scale (see rowScale); rhs entries too
+    const add = (r: number, c: number, v: number) => {
+      sys.add(r, c, v * rowScale[r]);
+      const a = Math.abs(v);
+      if (a > rowMax[r]) rowMax[r] = a;
+    };
+    const addRhs = (r: number, v: number) => sys.addRhs(r, v * rowScale[r]);
+    // eslint-disable-next-line @typescript-eslint/no-this-alias
+    const self = this;
+    const mag = (c: number) => (c >= 0 ? Math.abs(self.loadingAt[c]) : 0);
     return {
       gmin: run.gmin,
       sourceScale: run.sourceScale,
@@ -63,22 +138,41 @@ export class MnaCircuit {
         flag.limited = true;
       },
       conductance(a, b, g) {
-        if (a >= 0) sys.add(a, a, g);
-        if (b >= 0) sys.add(b, b, g);
+        const n = Math.abs(g) * (mag(a) + mag(b));
+        if (a >= 0) {
+          add(a, a, g);
+          noise[a] += n;
+        }
+        if (b >= 0) {
+          add(b, b, g);
+          noise[b] += n;
+        }
         if (a >= 0 && b >= 0) {
-          sys.add(a, b, -g);
-          sys.add(b, a, -g);
+          add(a, b, -g);
+          add(b, a, -g);
         }
       },
       add(r, c, v) {
-        if (r >= 0 && c >= 0) sys.add(r, c, v);
+        if (r >= 0 && c >= 0) {
+          add(r, c, v);
+          noise[r] += Math.abs(v) * mag(c);
+        }
       },
       addRhs(r, v) {
-        if (r >= 0) sys.addRhs(r, v);
+        if (r >= 0) {
+          addRhs(r, v);
+          noise[r] += Math.abs(v);
+        }
       },
       current(a, b, i) {
-        if (a >= 0) sys.addRhs(a, -i);
-        if (b >= 0) sys.addRhs(b, i);
+        if (a >= 0) {
+          addRhs(a, -i);
+          noise[a] += Math.abs(i);
+        }
+        if (b >= 0) {
+          addRhs(b, i);
+          noise[b] += Math.abs(i);
+        }
       },
       nonlinear(nodes, currents, controls, jac) {
         for (let k = 0; k < nodes.length; k++) {
@@ -86,14 +180,17 @@ export class MnaCircuit {
           if (n < 0) continue;
           let eq = currents[k];
           const row = jac[k];
+          let nz = Math.abs(currents[k]);
           for (let m = 0; m < controls.length; m++) {
             const [p, q, v] = controls[m];
             const g = row[m];
-            if (p >= 0) sys.add(n, p, g);
-            if (q >= 0) sys.add(n, q, -g);
+            if (p >= 0) add(n, p, g);
+            if (q >= 0) add(n, q, -g);
             eq -= g * v;
+            nz += Math.abs(g) * (mag(p) + mag(q) + Math.abs(v));
           }
-          sys.addRhs(n, -eq);
+          addRhs(n, -eq);
+          noise[n] += nz;
         }
       },
     };
@@ -120,7 +217,7 @@ export class MnaCircuit {
       if (this.kinds[i] !== UNKNOWN_NODE) continue;
       let ri = r[i];
       if (run.shunt > 0) ri += run.shunt * x[i];
-      const t = this.tol.reltol * m[i] + this.tol.abstol;
+      const t = this.tol.reltol * m[i] + this.tol.abstol + ROUNDING_ULPS * Number.EPSILON * this.noise[i];
       const q = Math.abs(ri) / t;
       if (!(q <= worst)) {
         worst = q;
@@ -165,7 +262,7 @@ export class MnaCircuit {
     };
     const x = new Float64Array(n);
     for (const d of this.devices) {
-      d.begin?.(x);
+      d.begin?.(x, 'cold');
       d.load(st, x);
     }
     for (let i = 0; i < n; i++) if (this.kinds[i] === UNKNOWN_NODE) rec(i, i);
@@ -175,24 +272,38 @@ export class MnaCircuit {
   newton(x0: Float64Array, run: NewtonRun): NewtonOutcome {
     let x: Float64Array = x0.slice();
     let prev: Float64Array = x0.slice();
-    for (const d of this.devices) d.begin?.(x);
+    // one scan for all devices (a per-device scan would cost devices × unknowns)
+    const start: StartKind = x.every((v) => v === 0) ? (run.loadsOnAtStart ? 'cold-loads-on' : 'cold') : 'warm';
     const flag = { limited: false };
+    if (!this.scaleReady && this.nonlinear) {
+      // a load that only records row sizes, so even the first iteration is equilibrated
+      const dry = this.stamper(run, flag, { add() {}, addRhs() {} });
+      this.rowMax.fill(0);
+      this.loadingAt = x;
+      for (const d of this.devices) {
+        d.begin?.(x, start);
+        d.load(dry, x);
+      }
+      this.updateRowScale();
+      this.scaleReady = true;
+    }
+    for (const d of this.devices) d.begin?.(x, start);
     const st = this.stamper(run, flag);
     const { reltol, vntol, abstol } = this.tol;
     for (let it = 1; it <= run.maxIterations; it++) {
       this.system.clear();
       flag.limited = false;
+      this.noise.fill(0);
+      this.rowMax.fill(0);
+      this.loadingAt = x;
       for (const d of this.devices) d.load(st, x);
-      if (run.shunt > 0) for (let i = 0; i < this.size; i++) if (this.kinds[i] === UNKNOWN_NODE) this.system.add(i, i, run.shunt);
+      if (run.shunt > 0) for (let i = 0; i < this.size; i++) if (this.kinds[i] === UNKNOWN_NODE) this.system.add(i, i, run.shunt * this.rowScale[i]);
+      if (this.nonlinear) this.updateRowScale();
       const sol = this.system.solve();
       if (!(sol instanceof Float64Array)) return { converged: false, x, prev, iterations: it, singular: sol.unknowns };
-      let finite = true;
-      for (let i = 0; i < sol.length; i++)
-        if (!Number.isFinite(sol[i])) {
-          finite = false;
-          break;
-        }
-      if (!finite) return { converged: false, x, prev, iterations: it, nonFinite: true };
+      let bad: number[] | null = null;
+      for (let i = 0; i < sol.length; i++) if (!Number.isFinite(sol[i])) (bad ??= []).push(i);
+      if (bad) return { converged: false, x, prev, iterations: it, nonFinite: bad };
       if (!this.nonlinear) return { converged: true, x: sol, prev: x, iterations: it };
       let stepOk = true;
       for (let i = 0; i < this.size; i++) {

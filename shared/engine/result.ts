@@ -70,6 +70,8 @@ export interface SolveFailure {
   error: SolveErrorInfo;
   /** warnings found before the failure (e.g. unconnected pins), to help explain it */
   warnings: SolveWarning[];
+  /** Newton iterations spent before giving up (absent when the solve never started) */
+  iterations?: number;
 }
 
 export type SolveResult = SolveSuccess | SolveFailure;

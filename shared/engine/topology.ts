@@ -52,6 +52,8 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
     };
 
   const nNets = t.netNames.length;
+  // ground symbols and labels sit on nets but are no help in fixing one: leave them out of lists
+  const connectors = new Set(t.parts.filter((p) => p.type === 'ground' || p.type === 'net_label').map((p) => p.partId));
 
   // ---- loops of ideal voltage constraints (sources without internal resistance, 0 Ω links)
   // union-find with offsets: pot[i] = v(i) − v(root(i))
@@ -181,7 +183,7 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
     if (feeding.length) {
       const netNames = nets.map((i) => t.netNames[i]);
       const others = new Set<string>();
-      for (const i of nets) for (const pin of t.netPins[i]) others.add(pin.split('.')[0]);
+      for (const i of nets) for (const pin of t.netPins[i]) if (!connectors.has(pin.split('.')[0])) others.add(pin.split('.')[0]);
       for (const f of feeding) others.delete(f.partId);
       const ids = feeding.map((f) => f.partId);
       const only = others.size === 0 ? `only ${listParts(ids)} ${ids.length > 1 ? 'connect' : 'connects'} there` : `${listParts([...others])} ${others.size > 1 ? 'do' : 'does'} not give it a DC path to ground`;
@@ -199,7 +201,7 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
     for (let i = 0; i < nNets; i++)
       if (comp[i] === c && t.active[i]) {
         allNets.push(t.netNames[i]);
-        for (const pin of t.netPins[i]) allParts.add(pin.split('.')[0]);
+        for (const pin of t.netPins[i]) if (!connectors.has(pin.split('.')[0])) allParts.add(pin.split('.')[0]);
       }
   return {
     code: 'floating_net',

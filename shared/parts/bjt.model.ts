@@ -1,7 +1,7 @@
 import { GROUND, nodeV, type Device, type DeviceContext, type DeviceModel } from '../engine/device';
-import { criticalVoltage, dlimexp, limexp, pnjlim, scaleSaturationCurrent } from '../engine/junction';
+import { criticalVoltage, dlimexp, expLimitFor, limexpm1, pnjlim, scaleSaturationCurrent, type ExpLimit } from '../engine/junction';
 import type { ParamsOf } from '../sheet/schema';
-import { fmt } from './model-helpers';
+import { beyondModelWarning, fmt, saturationCurrentProblem } from './model-helpers';
 
 type BjtParams = ParamsOf<'npn'>;
 
@@ -18,15 +18,14 @@ export interface EbersMollEval {
  * Ebers–Moll transport model (Ebers & Moll, Proc. IRE 42(12), 1954), npn sense:
  *   I_F = I_S(e^{vbe/V_T} − 1),  I_R = I_S(e^{vbc/V_T} − 1)
  *   i_C = I_F − I_R − I_R/β_R,   i_B = I_F/β_F + I_R/β_R,   i_E = −(i_C + i_B)
- * with gmin across each junction.
+ * with gmin across each junction. `lim` is where the exponentials continue linearly
+ * (expLimitFor(is); by default at an exponent of 80).
  */
-export function ebersMoll(is: number, vt: number, bf: number, br: number, vbe: number, vbc: number, gmin: number): EbersMollEval {
-  const ef = limexp(vbe / vt);
-  const er = limexp(vbc / vt);
-  const iF = is * (ef - 1);
-  const iR = is * (er - 1);
-  const gf = (is / vt) * dlimexp(vbe / vt);
-  const gr = (is / vt) * dlimexp(vbc / vt);
+export function ebersMoll(is: number, vt: number, bf: number, br: number, vbe: number, vbc: number, gmin: number, lim?: ExpLimit): EbersMollEval {
+  const iF = is * limexpm1(vbe / vt, lim);
+  const iR = is * limexpm1(vbc / vt, lim);
+  const gf = (is / vt) * dlimexp(vbe / vt, lim);
+  const gr = (is / vt) * dlimexp(vbc / vt, lim);
   const ic = iF - iR - iR / br - gmin * vbc;
   const ib = iF / bf + iR / br + gmin * (vbe + vbc);
   const ie = -(ic + ib);
@@ -46,6 +45,7 @@ function createBjt(polarity: 1 | -1, ctx: DeviceContext<BjtParams>): Device {
   const vt = env.vt;
   const is = bjtSaturationCurrent(params, env.temperatureK);
   const vcrit = criticalVoltage(vt, is);
+  const lim = expLimitFor(is);
   const bf = params.beta;
   const br = params.reverseBeta;
   let vbeOld = 0;
@@ -55,16 +55,15 @@ function createBjt(polarity: 1 | -1, ctx: DeviceContext<BjtParams>): Device {
   const evalAt = (x: Float64Array, gmin: number) => {
     const vbe = p * (nodeV(x, b) - nodeV(x, e));
     const vbc = p * (nodeV(x, b) - nodeV(x, c));
-    return { vbe, vbc, m: ebersMoll(is, vt, bf, br, vbe, vbc, gmin) };
+    return { vbe, vbc, m: ebersMoll(is, vt, bf, br, vbe, vbc, gmin, lim) };
   };
   return {
     partId,
     nonlinear: true,
     nodes: pins.filter((n) => n !== GROUND),
-    begin(x) {
-      if (x.length === 0 || x.every((v) => v === 0)) cold = true;
-      else {
-        cold = false;
+    begin(x, start) {
+      cold = start !== 'warm';
+      if (!cold) {
         vbeOld = p * (nodeV(x, b) - nodeV(x, e));
         vbcOld = p * (nodeV(x, b) - nodeV(x, c));
       }
@@ -87,7 +86,7 @@ function createBjt(polarity: 1 | -1, ctx: DeviceContext<BjtParams>): Device {
       }
       vbeOld = vbe;
       vbcOld = vbc;
-      const m = ebersMoll(is, vt, bf, br, vbe, vbc, s.gmin);
+      const m = ebersMoll(is, vt, bf, br, vbe, vbc, s.gmin, lim);
       s.nonlinear(
         [c, b, e],
         [p * m.ic, p * m.ib, p * m.ie],
@@ -139,6 +138,7 @@ function createBjt(polarity: 1 | -1, ctx: DeviceContext<BjtParams>): Device {
           severity: 'warning' as const,
           message: `${partId} (${kind}) operates in reverse (collector and emitter roles swapped): check its pin connections.`,
         });
+      if (vbe / vt > lim.u || vbc / vt > lim.u) warnings.unshift(beyondModelWarning(partId, Math.max(Math.abs(pi[0]), Math.abs(pi[2]))));
       return { derived: { region, vbe, vce, ic, ib, forcedBeta: ib !== 0 ? ic / ib : 0 }, warnings };
     },
   };
@@ -149,6 +149,7 @@ export const npnModel: DeviceModel<BjtParams> = {
     { kind: 'resistive', a: 1, b: 2 },
     { kind: 'resistive', a: 1, b: 0 },
   ],
+  check: (p, env) => saturationCurrentProblem('saturationCurrent', bjtSaturationCurrent(p, env.temperatureK), env.temperatureC),
   create: (ctx) => createBjt(1, ctx),
 };
 
@@ -157,5 +158,6 @@ export const pnpModel: DeviceModel<BjtParams> = {
     { kind: 'resistive', a: 1, b: 2 },
     { kind: 'resistive', a: 1, b: 0 },
   ],
+  check: (p, env) => saturationCurrentProblem('saturationCurrent', bjtSaturationCurrent(p, env.temperatureK), env.temperatureC),
   create: (ctx) => createBjt(-1, ctx),
 };

@@ -1,22 +1,17 @@
 import type { DeviceModel } from '../engine/device';
-import { criticalVoltage, scaleSaturationCurrent, type JunctionParams } from '../engine/junction';
+import { criticalVoltage, junctionParams, scaleSaturationCurrent, type JunctionParams } from '../engine/junction';
 import type { ParamsOf } from '../sheet/schema';
-import { fmt, junctionDevice } from './model-helpers';
+import { fmt, junctionDevice, saturationCurrentProblem } from './model-helpers';
 
 export function diodeJunction(p: ParamsOf<'diode'>, temperatureK: number, vt: number): JunctionParams {
   const nvt = p.emissionCoefficient * vt;
   const is = scaleSaturationCurrent(p.saturationCurrent, temperatureK, p.emissionCoefficient, p.bandgap, p.saturationCurrentTempExp);
-  return {
-    is,
-    nvt,
-    ...(p.breakdownVoltage !== undefined
-      ? { breakdown: { voltage: p.breakdownVoltage, current: p.breakdownCurrent, slope: nvt } }
-      : {}),
-  };
+  return junctionParams(is, nvt, p.breakdownVoltage !== undefined ? { voltage: p.breakdownVoltage, current: p.breakdownCurrent, slope: nvt } : undefined);
 }
 
 export const diodeModel: DeviceModel<ParamsOf<'diode'>> = {
   topology: () => [{ kind: 'resistive', a: 0, b: 1 }],
+  check: (p, env) => saturationCurrentProblem('saturationCurrent', diodeJunction(p, env.temperatureK, env.vt).is, env.temperatureC),
   create({ partId, params, env, pins, alloc }) {
     const jp = diodeJunction(params, env.temperatureK, env.vt);
     return junctionDevice(partId, pins, jp, params.seriesResistance, alloc, criticalVoltage(jp.nvt, jp.is), (_x, pv, pi) => {

@@ -1,5 +1,5 @@
 import type { DeviceModel } from '../engine/device';
-import { criticalVoltage, type JunctionParams } from '../engine/junction';
+import { criticalVoltage, junctionParams, type JunctionParams } from '../engine/junction';
 import type { ParamsOf } from '../sheet/schema';
 import { fmt, junctionDevice } from './model-helpers';
 
@@ -12,15 +12,19 @@ function junctionVoltageAtTest(p: ParamsOf<'led'>, temperatureC: number): number
 export function ledJunction(p: ParamsOf<'led'>, env: { temperatureC: number; vt: number }): JunctionParams {
   const nvt = p.emissionCoefficient * env.vt;
   const vj = junctionVoltageAtTest(p, env.temperatureC);
-  return { is: p.testCurrent / Math.expm1(vj / nvt), nvt };
+  return junctionParams(p.testCurrent / Math.expm1(vj / nvt), nvt);
 }
 
 export const ledModel: DeviceModel<ParamsOf<'led'>> = {
   topology: () => [{ kind: 'resistive', a: 0, b: 1 }],
   check(p, env) {
     const vj = junctionVoltageAtTest(p, env.temperatureC);
-    if (!(vj > 0))
-      return [['seriesResistance', `leaves no junction voltage at the test current (forward voltage ${fmt(p.forwardVoltage, 'V')}, drop across the series resistance ${fmt(p.testCurrent * p.seriesResistance, 'V')})`]];
+    if (!(vj > 0)) {
+      const vf = p.forwardVoltage + p.forwardVoltageTempco * (env.temperatureC - 25);
+      if (!(vf > 0))
+        return [['forwardVoltageTempco', `gives a forward voltage of ${fmt(vf, 'V')} at ${env.temperatureC} °C; check the temperature coefficient and the temperature`]];
+      return [['seriesResistance', `leaves no junction voltage at the test current (forward voltage ${fmt(vf, 'V')}, drop across the series resistance ${fmt(p.testCurrent * p.seriesResistance, 'V')})`]];
+    }
     const is = p.testCurrent / Math.expm1(vj / (p.emissionCoefficient * env.vt));
     if (!(is > 0) || !Number.isFinite(is)) return [['forwardVoltage', 'gives a saturation current that cannot be represented; check forwardVoltage and emissionCoefficient']];
     return [];

@@ -30,11 +30,25 @@ export const loadModel: DeviceModel<ParamsOf<'load'>> = {
     }
     const P = params.value;
     const vmin = params.minVoltage;
+    let cold = false;
     return {
       partId,
       nonlinear: true,
+      startsOpen: true,
       nodes,
+      begin(_x, start) {
+        cold = start === 'cold';
+      },
       load(s, x) {
+        if (cold) {
+          // Start open, as a load switched on after its supply: from the unloaded voltage Newton
+          // walks down to the higher of the (usually two) operating points, the one a real supply
+          // settles at. From 0 V it would find the low one, or the undervoltage point below minVoltage.
+          cold = false;
+          s.markLimited();
+          s.nonlinear([pos, neg], [0, 0], [[pos, neg, 0]], [[0], [0]]);
+          return;
+        }
         const v = nodeV(x, pos) - nodeV(x, neg);
         const { i, g } = powerLoadCurrent(P * s.sourceScale, vmin, v);
         s.nonlinear([pos, neg], [i, -i], [[pos, neg, v]], [[g], [-g]]);

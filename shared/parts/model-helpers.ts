@@ -1,6 +1,6 @@
 // Building blocks shared by the device models.
 import { GROUND, isLink, nodeV, type Allocator, type Device, type DeviceWarning, type ResidualSink, type Stamper, type TopologyEdge } from '../engine/device';
-import { junctionCurrent, limitJunction, type JunctionParams } from '../engine/junction';
+import { JUNCTION_CURRENT_CEILING, junctionCurrent, limitJunction, type JunctionParams } from '../engine/junction';
 
 /** A linear two-terminal resistance between nodes a and b; 0 Ω becomes a branch-current link. */
 export interface Element {
@@ -96,13 +96,9 @@ export function junctionDevice(
     partId,
     nonlinear: true,
     nodes,
-    begin(x) {
-      if (x.length === 0 || x.every((v) => v === 0)) {
-        cold = true;
-      } else {
-        cold = false;
-        vold = nodeV(x, j) - nodeV(x, ca);
-      }
+    begin(x, start) {
+      cold = start !== 'warm';
+      if (!cold) vold = nodeV(x, j) - nodeV(x, ca);
     },
     load(s, x) {
       rs?.load(s, x);
@@ -130,8 +126,47 @@ export function junctionDevice(
       const i = rs ? rs.current(x) : junctionCurrent(jp, nodeV(x, an) - nodeV(x, ca), gmin).i;
       return [i, -i];
     },
-    ...(report ? { report } : {}),
+    report(x, pv, pi) {
+      const own = report?.(x, pv, pi) ?? {};
+      const v = nodeV(x, j) - nodeV(x, ca);
+      const beyond = v / jp.nvt > jp.lim.u || (jp.breakdown !== undefined && -(v + jp.breakdown.voltage) / jp.breakdown.slope > jp.breakdown.lim.u);
+      if (!beyond) return own;
+      return { ...own, warnings: [beyondModelWarning(partId, pi[0]), ...(own.warnings ?? [])] };
+    },
   };
+}
+
+/**
+ * A junction driven past the range where its exponential is followed exactly (see expLimitFor): the
+ * numbers are then those of the linear continuation, not of the device law, and mean only "far too
+ * much". Almost always an ideal source straight across the junction.
+ */
+export function beyondModelWarning(partId: string, current: number): DeviceWarning {
+  return {
+    code: 'junction_beyond_model',
+    severity: 'danger',
+    message: `${partId} is driven so hard that its junction equation no longer applies (${fmt(Math.abs(current), 'A')} reported; beyond ${fmt(JUNCTION_CURRENT_CEILING, 'A')} the exponential is continued linearly), so its current and voltage are not meaningful. It is probably straight across a supply: add a series resistor.`,
+  };
+}
+
+/** Saturation currents the junction equations can represent (A): see expLimitFor in engine/junction. */
+export const SATURATION_CURRENT_RANGE = { min: 1e-290, max: 1e6 } as const;
+
+/**
+ * Why a junction's saturation current at temperature cannot be used, or null. Far below 0 °C the
+ * SPICE temperature equation sends I_S to 0 (an insulator), far above it beyond any real part; the
+ * field named is the param to look at.
+ */
+export function saturationCurrentProblem(field: string, is: number, temperatureC: number): Array<[string, string]> {
+  const { min, max } = SATURATION_CURRENT_RANGE;
+  if (is >= min && is <= max) return [];
+  const at = temperatureC === 25 ? '' : ` at ${temperatureC} °C`;
+  return [
+    [
+      field,
+      `gives a saturation current of ${Number.isFinite(is) ? is.toExponential(2) : String(is)} A${at}, outside the ${min.toExponential(0)} A to ${max.toExponential(0)} A the junction equations can represent. Check the value${at ? '; the semiconductor models are meant for about −55 °C to 150 °C (common practice for silicon parts)' : ''}`,
+    ],
+  ];
 }
 
 /** Power-rating warnings: danger above the rating, caution above 50 % of it. */

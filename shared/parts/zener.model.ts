@@ -1,7 +1,7 @@
 import type { DeviceModel } from '../engine/device';
-import { criticalVoltage, scaleSaturationCurrent, type JunctionParams } from '../engine/junction';
+import { criticalVoltage, junctionParams, scaleSaturationCurrent, type JunctionParams } from '../engine/junction';
 import type { ParamsOf } from '../sheet/schema';
-import { fmt, junctionDevice, powerRatingWarnings } from './model-helpers';
+import { fmt, junctionDevice, powerRatingWarnings, saturationCurrentProblem } from './model-helpers';
 
 /**
  * Reverse breakdown passing testCurrent at zenerVoltage(T) with dynamic resistance zenerResistance
@@ -11,14 +11,15 @@ export function zenerJunction(p: ParamsOf<'zener'>, env: { temperatureK: number;
   const nvt = p.emissionCoefficient * env.vt;
   const is = scaleSaturationCurrent(p.saturationCurrent, env.temperatureK, p.emissionCoefficient, 1.11, 3);
   const vz = p.zenerVoltage + p.zenerTempco * (env.temperatureC - 25);
-  return { is, nvt, breakdown: { voltage: vz, current: p.testCurrent, slope: p.zenerResistance * p.testCurrent } };
+  return junctionParams(is, nvt, { voltage: vz, current: p.testCurrent, slope: p.zenerResistance * p.testCurrent });
 }
 
 export const zenerModel: DeviceModel<ParamsOf<'zener'>> = {
   topology: () => [{ kind: 'resistive', a: 0, b: 1 }],
   check(p, env) {
     const vz = p.zenerVoltage + p.zenerTempco * (env.temperatureC - 25);
-    return vz > 0 ? [] : [['zenerTempco', `gives a Zener voltage of ${fmt(vz, 'V')} at ${env.temperatureC} °C`]];
+    if (!(vz > 0)) return [['zenerTempco', `gives a Zener voltage of ${fmt(vz, 'V')} at ${env.temperatureC} °C`]];
+    return saturationCurrentProblem('saturationCurrent', zenerJunction(p, env).is, env.temperatureC);
   },
   create({ partId, params, env, pins, alloc }) {
     const jp = zenerJunction(params, env);
