@@ -58,7 +58,9 @@ export const Palette = memo(function Palette() {
                       active ? 'bg-accent text-accent-ink' : 'text-ink hover:bg-sunken'
                     }`}
                     aria-pressed={active}
-                    aria-label={`Place ${paletteLabel(type)}`}
+                    // The visible key hint is part of the name (WCAG 2.5.3, label in name).
+                    aria-label={`Place ${paletteLabel(type)}${key ? ` ${key}` : ''}`}
+                    aria-keyshortcuts={key}
                     title={`${partSpecs[type].description}${key ? ` (key ${key})` : ''}`}
                     data-testid={`palette-${type}`}
                   >
