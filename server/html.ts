@@ -16,5 +16,5 @@ h1{font-size:1.3rem}.note{background:#fff4d6;border:1px solid #e5c66b;padding:.6
 button,input{font:inherit;padding:.35rem .7rem}ul{padding:0;list-style:none}li{margin:.4rem 0}
 table{border-collapse:collapse;width:100%}td,th{border-bottom:1px solid #ddd;padding:.35rem;text-align:left;vertical-align:top}
 pre{white-space:pre-wrap;background:#fff;border:1px solid #ddd;padding:.5rem}
-</style></head><body>${body}</body></html>`;
+</style></head><body><main>${body}</main></body></html>`;
 }

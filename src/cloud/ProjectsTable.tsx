@@ -18,7 +18,7 @@ const columns: ColumnDef<ProjectSummary>[] = [
   },
   { accessorKey: 'partCount', header: 'Parts', cell: ({ getValue }) => <span className="num">{getValue<number>()}</span> },
   { accessorKey: 'memberCount', header: 'People', cell: ({ getValue }) => <span className="num">{getValue<number>()}</span> },
-  { id: 'settings', header: '', enableSorting: false, cell: ({ row }) => <Link className="text-sm text-ink-muted hover:text-ink" to={cloudPaths.settings(row.original.id)} aria-label={`Settings of ${row.original.title}`}>Settings</Link> },
+  { id: 'settings', header: () => <span className="sr-only">Actions</span>, enableSorting: false, cell: ({ row }) => <Link className="text-sm text-ink-muted hover:text-ink" to={cloudPaths.settings(row.original.id)} aria-label={`Settings of ${row.original.title}`}>Settings</Link> },
 ];
 
 export function ProjectsTable({ projects }: { projects: ProjectSummary[] }) {

@@ -58,8 +58,8 @@ export const Palette = memo(function Palette() {
                       active ? 'bg-accent text-accent-ink' : 'text-ink hover:bg-sunken'
                     }`}
                     aria-pressed={active}
-                    // The visible key hint is part of the name (WCAG 2.5.3, label in name).
-                    aria-label={`Place ${paletteLabel(type)}${key ? ` ${key}` : ''}`}
+                    // Named by its visible label (WCAG 2.5.3, label in name); the symbol and the key hint
+                    // are hidden from the name, the key is announced through aria-keyshortcuts.
                     aria-keyshortcuts={key}
                     title={`${partSpecs[type].description}${key ? ` (key ${key})` : ''}`}
                     data-testid={`palette-${type}`}
@@ -69,7 +69,7 @@ export const Palette = memo(function Palette() {
                     </span>
                     <span className="min-w-0 flex-1 truncate">{paletteLabel(type)}</span>
                     {key && (
-                      <kbd className={`num rounded border px-1 text-[10px] ${active ? 'border-accent-ink/40' : 'border-rule text-ink-muted'}`}>{key}</kbd>
+                      <kbd aria-hidden="true" className={`num rounded border px-1 text-[10px] ${active ? 'border-accent-ink/40' : 'border-rule text-ink-muted'}`}>{key}</kbd>
                     )}
                   </button>
                 </li>
