@@ -14,6 +14,8 @@ import { SIDE_TO_HANDLE, type PartFlowNode } from './flowAdapter';
 import { currentText, powerText, valueText } from './partLabels';
 import { severityRank } from '../solve/solveView';
 import { useCanvasDerived } from './CanvasDerived';
+import { setText, useLiveDom } from './useLiveDom';
+import type { PartResult } from '../solve/resultTypes';
 import { NetTagBadge } from './NetTagBadge';
 import { PotSlider } from './PotSlider';
 import type { Part } from '../../../shared/sheet';
@@ -38,11 +40,11 @@ const LABEL_STYLE: Record<LabelSide, string> = {
   right: 'left-full top-1/2 -translate-y-1/2 ml-1 items-start text-left',
 };
 
-/** The voltage tag at one pin, if the solve put one there. */
+/** The voltage tag at one pin, if the solve put one there (renders when a tag comes or goes; its number is live). */
 const PinTag = memo(function PinTag({ pinRef, side, x, y, onLabel }: { pinRef: string; side: Side; x: number; y: number; onLabel: boolean }) {
-  const tag = useSolveState((s) => s.tags[pinRef]);
-  if (!tag) return null;
-  return <NetTagBadge tag={tag} side={side} x={x} y={y} hideName={onLabel} />;
+  const net = useSolveState((s) => s.tags[pinRef]?.net);
+  if (!net) return null;
+  return <NetTagBadge pinRef={pinRef} net={net} side={side} x={x} y={y} hideName={onLabel} />;
 });
 
 /** The symbol, pins, junction dots and tags: renders again only when the part or its wiring changes. */
@@ -84,30 +86,34 @@ const Symbol = memo(function Symbol({ part, style }: { part: Part; style: Symbol
   return <PartSymbol type={part.type} rotation={part.rotation ?? 0} style={style} params={part.params as Record<string, unknown>} />;
 });
 
-/** "1.2 mA · 14 mW" for the part, or null (no solve yet, readings hidden, nothing to say). */
-function useReadingText(part: Part): string | null {
-  const { showReadings } = useCanvasDerived();
+/** "1.2 mA · 14 mW" for the part, or "" (no solve yet, nothing to say). */
+function readingText(part: Part, r: PartResult | undefined): string {
+  return [currentText(part, r), powerText(part, r)].filter(Boolean).join(' · ');
+}
+
+/** The reading line under a part's value: written live (useLiveDom), hidden while empty. */
+function ReadingLine({ part }: { part: Part }) {
   // the part's own result object: the solve keeps it when its numbers did not change
-  // (viewSharing.ts), so this renders only when there is something new to format
-  const r = useSolveState((s) => (showReadings ? s.result?.parts[part.id] : undefined));
-  return useMemo(() => [currentText(part, r), powerText(part, r)].filter(Boolean).join(' · ') || null, [part, r]);
+  // (viewSharing.ts), so the text is formatted only when there is something new
+  const line = useLiveDom<PartResult | undefined>(
+    (s) => s.result?.parts[part.id],
+    (el, r) => setText(el, readingText(part, r)),
+  );
+  return <span ref={line} className="num text-[10px] text-ink/80 empty:hidden" data-testid={`part-reading-${part.id}`} />;
 }
 
 const PartLabel = memo(function PartLabel({ part }: { part: Part }) {
   const corner = useEditorState((s) => s.session.corners[part.id]);
-  const reading = useReadingText(part);
+  const { showReadings } = useCanvasDerived();
+  const value = useMemo(() => valueText(part), [part]);
   return (
     <div className={`tl-label pointer-events-none absolute flex flex-col whitespace-nowrap leading-tight ${LABEL_STYLE[labelSide(part)]}`}>
       <span className="num text-[11px] font-semibold text-ink">
         {part.id}
         {corner && <span className="ml-1 rounded-sm bg-sunken px-1 text-[9px] font-semibold uppercase text-caution">{corner}</span>}
       </span>
-      <span className="num text-[11px] text-ink-muted">{valueText(part)}</span>
-      {reading && (
-        <span className="num text-[10px] text-ink/80" data-testid={`part-reading-${part.id}`}>
-          {reading}
-        </span>
-      )}
+      <span className="num text-[11px] text-ink-muted">{value}</span>
+      {showReadings && <ReadingLine part={part} />}
       {part.type === 'potentiometer' && <PotSlider part={part} />}
     </div>
   );

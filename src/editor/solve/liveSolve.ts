@@ -11,9 +11,16 @@ import { buildSolveView, createTopologyCache, emptySolveView, type SolveView } f
 import { shareView } from './viewSharing';
 
 export interface LiveSolveState extends SolveView {
-  /** a solve is running */
+  /** a solve has been running for a while (BUSY_AFTER_MS): worth a "Solving…" */
   busy: boolean;
 }
+
+/**
+ * Solves that answer sooner than this do not flag `busy`: a worker solve of an ordinary sheet
+ * takes a few ms, and flagging each one would flash "Solving…" and wake every subscriber of the
+ * store twice per slider step for nothing.
+ */
+export const BUSY_AFTER_MS = 150;
 
 /** Only what changes the result: layout (positions, rotation, labels, wire routes and ids) is dropped. */
 export function electricalKey(sheet: Sheet): string {
@@ -42,9 +49,16 @@ export function startLiveSolve(editor: Editor, makeHandle: () => SolverHandle, o
   const store = createStore<LiveSolveState>(() => ({ ...emptySolveView, busy: false }));
   const topology = createTopologyCache();
   let disposed = false;
+  let busyTimer: ReturnType<typeof setTimeout> | null = null;
   const solver = new LatestWinsSolver(makeHandle, {
     onBusy: (busy) => {
-      if (store.getState().busy !== busy) store.setState({ busy });
+      if (busy) {
+        busyTimer ??= setTimeout(() => store.setState({ busy: true }), BUSY_AFTER_MS);
+        return;
+      }
+      if (busyTimer) clearTimeout(busyTimer);
+      busyTimer = null;
+      if (store.getState().busy) store.setState({ busy: false });
     },
     onResult: ({ sheet, result, ms }) => {
       const prev = store.getState();
@@ -80,6 +94,7 @@ export function startLiveSolve(editor: Editor, makeHandle: () => SolverHandle, o
     store,
     dispose() {
       disposed = true;
+      if (busyTimer) clearTimeout(busyTimer);
       unsubscribe();
       solver.dispose();
     },
