@@ -743,7 +743,7 @@ function describeFailure(o: StrategyOutcomeFail, inst: Instance, base: BaseInfo)
     for (const d of inst.devices) if (d.nodes.some((nd) => o.singular!.includes(nd))) parts.add(d.partId);
     return {
       code: 'singular_matrix',
-      message: `The circuit equations have no unique solution${nets.length ? ` at net${nets.length > 1 ? 's' : ''} ${nets.map((s) => `"${s}"`).join(', ')}` : ''}${parts.size ? ` (parts ${[...parts].join(', ')})` : ''}: a voltage or a source current there is not determined. Look for parts that only connect to each other, ideal sources or 0 Ω links in a loop, or an open switch isolating part of the circuit.`,
+      message: `The circuit equations have no unique solution${nets.length ? ` at net${nets.length > 1 ? 's' : ''} ${nets.map((s) => `"${s}"`).join(', ')}` : ''}${parts.size ? ` (parts ${[...parts].join(', ')})` : ''}: a voltage or a source current there is not determined. Look for parts that only connect to each other, ideal sources or 0 Ω links in a loop, an open switch isolating part of the circuit, or values so extreme that one part's conductance swamps all the others.`,
       parts: [...parts],
       nets,
     };

@@ -67,8 +67,12 @@ export interface Stamper {
 
 /** Where a device adds its true (non-linearised) currents for the KCL residual. */
 export interface ResidualSink {
-  /** current `i` flowing from `node` into the device */
-  add(node: number, i: number): void;
+  /**
+   * Current `i` flowing from `node` into the device. `scale` (A, default |i|) is the size of the
+   * terms it is computed from, Σ|g|·|v| (e.g. g·(|v_a| + |v_b|) for a resistance): it tells the
+   * convergence test how much of `i` is mere rounding of the voltages.
+   */
+  add(node: number, i: number, scale?: number): void;
 }
 
 export interface DeviceWarning {

@@ -58,13 +58,20 @@ export function criticalVoltage(nvt: number, is: number): number {
  * Junction-voltage limiting: keep a Newton step on an exponential within where the linearisation
  * is trustworthy. Returns the limited voltage (or vnew itself).
  */
-export function pnjlim(vnew: number, vold: number, nvt: number, vcrit: number): number {
+export function pnjlim(vnew: number, vold: number, nvt: number, vcrit: number, vlin = Infinity): number {
+  // Above vlin the exponential is continued linearly (see limexp): the junction is a plain
+  // conductance there and needs no limiting. Without this, an ideal source holding a junction at
+  // 1 kV would take thousands of 0.5 V steps to get there (hard case 63).
+  if (vold >= vlin && vnew >= vlin) return vnew;
   if (vnew > vcrit && Math.abs(vnew - vold) > 2 * nvt) {
     if (vold > 0) {
       const arg = 1 + (vnew - vold) / nvt;
       return arg > 0 ? vold + nvt * Math.log(arg) : vcrit;
     }
-    return nvt * Math.log(vnew / nvt);
+    // From reverse bias into conduction: step to where the exponential starts. With a huge I_S the
+    // critical voltage is negative and vnew may be ≤ n·V_T, where the log would give −∞ or NaN
+    // (hard case 61); the exponential is tame there, so take the step as it is.
+    return vnew > nvt ? nvt * Math.log(vnew / nvt) : vnew;
   }
   if (vnew < 0) {
     // limit large negative steps too (as ngspice does)
@@ -131,9 +138,12 @@ export function limitJunction(p: JunctionParams, vnew: number, vold: number): nu
     const { voltage: bv, current: ib, slope: a } = p.breakdown;
     if (vnew < Math.min(0, -bv + 10 * a)) {
       const vcritB = criticalVoltage(a, ib);
-      const t = pnjlim(-(vnew + bv), -(vold + bv), a, vcritB);
-      return -(t + bv);
+      const tnew = -(vnew + bv);
+      const t = pnjlim(tnew, -(vold + bv), a, vcritB, p.breakdown.lim.u * a);
+      // unchanged: return vnew itself, since −(−(v + B) + B) need not round back to v and would
+      // count as a limited step in every iteration (hard case 62)
+      return t === tnew ? vnew : -(t + bv);
     }
   }
-  return pnjlim(vnew, vold, p.nvt, criticalVoltage(p.nvt, p.is));
+  return pnjlim(vnew, vold, p.nvt, criticalVoltage(p.nvt, p.is), p.lim.u * p.nvt);
 }

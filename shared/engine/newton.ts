@@ -17,6 +17,8 @@ export interface NewtonTolerances {
 export const UNKNOWN_NODE = 0;
 /** KCL residuals within this many ulps of a node's current scale count as zero (see `noise`). */
 const ROUNDING_ULPS = 16;
+/** a direct solve is refined when a row's residual exceeds this many ulps of its scale */
+const REFINE_ULPS = 8;
 export const UNKNOWN_BRANCH = 1;
 
 export interface NewtonOutcome {
@@ -48,13 +50,12 @@ export class MnaCircuit {
   private readonly residualSum: Float64Array;
   private readonly residualMax: Float64Array;
   /**
-   * Per node, Σ |matrix entry|·|unknown| (+ |rhs|) of the last load: the scale of the rounding in
-   * that node's currents. A node's KCL residual cannot be driven below a few ulps of it, however
-   * exact the solution (a 1 µΩ resistor at 1000 V: 1e6 S·1000 V·2.2e-16 ≈ 2e-7 A of noise).
+   * Per node, the scale of the rounding in its currents at the point of the last residual: Σ over
+   * the devices of |g|·(|v_a| + |v_b|) (ResidualSink.add's third argument). A node's KCL residual
+   * cannot be driven below a few ulps of it, however exact the solution (a 1 µΩ resistor at
+   * 1000 V: 1e6 S·1000 V·2.2e-16 ≈ 2e-7 A).
    */
   private readonly noise: Float64Array;
-  /** the iterate being loaded (the stamper weighs entries by it for `noise`) */
-  private loadingAt: Float64Array;
   /**
    * Row equilibration: each equation is multiplied by a power of two near 1/(its largest entry in
    * the previous iteration), which changes no unknown and is exact. Without it a junction forced far
@@ -104,7 +105,6 @@ export class MnaCircuit {
     this.residualSum = new Float64Array(size);
     this.residualMax = new Float64Array(size);
     this.noise = new Float64Array(size);
-    this.loadingAt = new Float64Array(size);
     this.rowScale = new Float64Array(size).fill(1);
     this.rowMax = new Float64Array(size);
   }
@@ -118,7 +118,6 @@ export class MnaCircuit {
   }
 
   private stamper(run: NewtonRun, flag: { limited: boolean }, sys: Pick<LinearSystem, 'add' | 'addRhs'> = this.system): Stamper {
-    const noise = this.noise;
     const rowScale = this.rowScale;
     const rowMax = this.rowMax;
     // every entry goes in scaled by its row's scale (see rowScale); rhs entries too
@@ -128,9 +127,6 @@ export class MnaCircuit {
       if (a > rowMax[r]) rowMax[r] = a;
     };
     const addRhs = (r: number, v: number) => sys.addRhs(r, v * rowScale[r]);
-    // eslint-disable-next-line @typescript-eslint/no-this-alias
-    const self = this;
-    const mag = (c: number) => (c >= 0 ? Math.abs(self.loadingAt[c]) : 0);
     return {
       gmin: run.gmin,
       sourceScale: run.sourceScale,
@@ -138,41 +134,22 @@ export class MnaCircuit {
         flag.limited = true;
       },
       conductance(a, b, g) {
-        const n = Math.abs(g) * (mag(a) + mag(b));
-        if (a >= 0) {
-          add(a, a, g);
-          noise[a] += n;
-        }
-        if (b >= 0) {
-          add(b, b, g);
-          noise[b] += n;
-        }
+        if (a >= 0) add(a, a, g);
+        if (b >= 0) add(b, b, g);
         if (a >= 0 && b >= 0) {
           add(a, b, -g);
           add(b, a, -g);
         }
       },
       add(r, c, v) {
-        if (r >= 0 && c >= 0) {
-          add(r, c, v);
-          noise[r] += Math.abs(v) * mag(c);
-        }
+        if (r >= 0 && c >= 0) add(r, c, v);
       },
       addRhs(r, v) {
-        if (r >= 0) {
-          addRhs(r, v);
-          noise[r] += Math.abs(v);
-        }
+        if (r >= 0) addRhs(r, v);
       },
       current(a, b, i) {
-        if (a >= 0) {
-          addRhs(a, -i);
-          noise[a] += Math.abs(i);
-        }
-        if (b >= 0) {
-          addRhs(b, i);
-          noise[b] += Math.abs(i);
-        }
+        if (a >= 0) addRhs(a, -i);
+        if (b >= 0) addRhs(b, i);
       },
       nonlinear(nodes, currents, controls, jac) {
         for (let k = 0; k < nodes.length; k++) {
@@ -180,17 +157,14 @@ export class MnaCircuit {
           if (n < 0) continue;
           let eq = currents[k];
           const row = jac[k];
-          let nz = Math.abs(currents[k]);
           for (let m = 0; m < controls.length; m++) {
             const [p, q, v] = controls[m];
             const g = row[m];
             if (p >= 0) add(n, p, g);
             if (q >= 0) add(n, q, -g);
             eq -= g * v;
-            nz += Math.abs(g) * (mag(p) + mag(q) + Math.abs(v));
           }
           addRhs(n, -eq);
-          noise[n] += nz;
         }
       },
     };
@@ -200,14 +174,17 @@ export class MnaCircuit {
   residualRatio(x: Float64Array, run: NewtonRun): { ratio: number; node: number } {
     const r = this.residualSum;
     const m = this.residualMax;
+    const noise = this.noise;
     r.fill(0);
     m.fill(0);
+    noise.fill(0);
     const sink: ResidualSink = {
-      add(node, i) {
+      add(node, i, scale) {
         if (node < 0) return;
         r[node] += i;
         const a = Math.abs(i);
         if (a > m[node]) m[node] = a;
+        noise[node] += scale ?? a;
       },
     };
     for (const d of this.devices) d.residual(x, sink, run.gmin, run.sourceScale);
@@ -269,6 +246,46 @@ export class MnaCircuit {
     return out;
   }
 
+  /**
+   * Iterative refinement of a direct solve in working precision (R. D. Skeel, "Iterative refinement
+   * implies numerical stability for Gaussian elimination", Math. Comp. 35, 1980): when a row's
+   * residual b − A·x is above a few ulps of Σ|a||x| + |b| — a partial-pivoting LU is only normwise
+   * stable, and a sheet with a 1e6 A loop beside nanoampere branches shows it — solve A·δ = r once
+   * or twice more. A nonlinear solve needs none: each Newton step re-evaluates the residual.
+   */
+  private refineLinear(x: Float64Array, run: NewtonRun): Float64Array {
+    const n = this.size;
+    for (let pass = 0; pass < 2; pass++) {
+      const r = new Float64Array(n);
+      const scale = new Float64Array(n);
+      const flag = { limited: false };
+      const measure = this.stamper(run, flag, {
+        add(row, col, v) {
+          r[row] -= v * x[col];
+          scale[row] += Math.abs(v * x[col]);
+        },
+        addRhs(row, v) {
+          r[row] += v;
+          scale[row] += Math.abs(v);
+        },
+      });
+      for (const d of this.devices) d.load(measure, x);
+      let worst = 0;
+      for (let i = 0; i < n; i++) worst = Math.max(worst, Math.abs(r[i]) / (REFINE_ULPS * Number.EPSILON * scale[i] + Number.MIN_VALUE));
+      if (!(worst > 1)) break;
+      this.system.clear();
+      const matrixOnly = this.stamper(run, flag, { add: (row, col, v) => this.system.add(row, col, v), addRhs() {} });
+      for (const d of this.devices) d.load(matrixOnly, x);
+      for (let i = 0; i < n; i++) this.system.addRhs(i, r[i]);
+      const d = this.system.solve();
+      if (!(d instanceof Float64Array) || !d.every(Number.isFinite)) break;
+      const next = new Float64Array(n);
+      for (let i = 0; i < n; i++) next[i] = x[i] + d[i];
+      x = next;
+    }
+    return x;
+  }
+
   newton(x0: Float64Array, run: NewtonRun): NewtonOutcome {
     let x: Float64Array = x0.slice();
     let prev: Float64Array = x0.slice();
@@ -279,7 +296,6 @@ export class MnaCircuit {
       // a load that only records row sizes, so even the first iteration is equilibrated
       const dry = this.stamper(run, flag, { add() {}, addRhs() {} });
       this.rowMax.fill(0);
-      this.loadingAt = x;
       for (const d of this.devices) {
         d.begin?.(x, start);
         d.load(dry, x);
@@ -293,9 +309,7 @@ export class MnaCircuit {
     for (let it = 1; it <= run.maxIterations; it++) {
       this.system.clear();
       flag.limited = false;
-      this.noise.fill(0);
       this.rowMax.fill(0);
-      this.loadingAt = x;
       for (const d of this.devices) d.load(st, x);
       if (run.shunt > 0) for (let i = 0; i < this.size; i++) if (this.kinds[i] === UNKNOWN_NODE) this.system.add(i, i, run.shunt * this.rowScale[i]);
       if (this.nonlinear) this.updateRowScale();
@@ -304,7 +318,7 @@ export class MnaCircuit {
       let bad: number[] | null = null;
       for (let i = 0; i < sol.length; i++) if (!Number.isFinite(sol[i])) (bad ??= []).push(i);
       if (bad) return { converged: false, x, prev, iterations: it, nonFinite: bad };
-      if (!this.nonlinear) return { converged: true, x: sol, prev: x, iterations: it };
+      if (!this.nonlinear) return { converged: true, x: this.refineLinear(sol, run), prev: x, iterations: it };
       let stepOk = true;
       for (let i = 0; i < this.size; i++) {
         const a = sol[i];

@@ -80,8 +80,8 @@ function createBjt(polarity: 1 | -1, ctx: DeviceContext<BjtParams>): Device {
       } else {
         const vbeNew = p * (nodeV(x, b) - nodeV(x, e));
         const vbcNew = p * (nodeV(x, b) - nodeV(x, c));
-        vbe = pnjlim(vbeNew, vbeOld, vt, vcrit);
-        vbc = pnjlim(vbcNew, vbcOld, vt, vcrit);
+        vbe = pnjlim(vbeNew, vbeOld, vt, vcrit, lim.u * vt);
+        vbc = pnjlim(vbcNew, vbcOld, vt, vcrit, lim.u * vt);
         if (vbe !== vbeNew || vbc !== vbcNew) s.markLimited();
       }
       vbeOld = vbe;
@@ -99,9 +99,14 @@ function createBjt(polarity: 1 | -1, ctx: DeviceContext<BjtParams>): Device {
     },
     residual(x, sink, gmin) {
       const { m } = evalAt(x, gmin);
-      sink.add(c, p * m.ic);
-      sink.add(b, p * m.ib);
-      sink.add(e, p * m.ie);
+      // rounding scale of each current: its slopes times the voltages they act on
+      const vb = Math.abs(nodeV(x, b));
+      const ve = vb + Math.abs(nodeV(x, e));
+      const vc = vb + Math.abs(nodeV(x, c));
+      const scale = (k: number, i: number) => Math.abs(i) + Math.abs(m.jac[k][0]) * ve + Math.abs(m.jac[k][1]) * vc;
+      sink.add(c, p * m.ic, scale(0, m.ic));
+      sink.add(b, p * m.ib, scale(1, m.ib));
+      sink.add(e, p * m.ie, scale(2, m.ie));
     },
     pinCurrents(x, gmin) {
       const { m } = evalAt(x, gmin);
@@ -144,12 +149,25 @@ function createBjt(polarity: 1 | -1, ctx: DeviceContext<BjtParams>): Device {
   };
 }
 
+/** Current gains the transport equations can carry: 1/β must not overflow, β·I_B must not either. */
+const GAIN_RANGE = { min: 1e-12, max: 1e12 } as const;
+
+function checkBjt(p: BjtParams, env: { temperatureK: number; temperatureC: number }): Array<[string, string]> {
+  const out: Array<[string, string]> = [];
+  for (const [field, name] of [['beta', 'forward'], ['reverseBeta', 'reverse']] as const) {
+    const b = p[field];
+    if (!(b >= GAIN_RANGE.min && b <= GAIN_RANGE.max))
+      out.push([field, `is a ${name} current gain of ${b}, outside the ${GAIN_RANGE.min} to ${GAIN_RANGE.max} the transistor equations can carry (real parts: about 10 to 1000 forward, 0.1 to 10 reverse)`]);
+  }
+  return [...out, ...saturationCurrentProblem('saturationCurrent', bjtSaturationCurrent(p, env.temperatureK), env.temperatureC)];
+}
+
 export const npnModel: DeviceModel<BjtParams> = {
   topology: () => [
     { kind: 'resistive', a: 1, b: 2 },
     { kind: 'resistive', a: 1, b: 0 },
   ],
-  check: (p, env) => saturationCurrentProblem('saturationCurrent', bjtSaturationCurrent(p, env.temperatureK), env.temperatureC),
+  check: checkBjt,
   create: (ctx) => createBjt(1, ctx),
 };
 
@@ -158,6 +176,6 @@ export const pnpModel: DeviceModel<BjtParams> = {
     { kind: 'resistive', a: 1, b: 2 },
     { kind: 'resistive', a: 1, b: 0 },
   ],
-  check: (p, env) => saturationCurrentProblem('saturationCurrent', bjtSaturationCurrent(p, env.temperatureK), env.temperatureC),
+  check: checkBjt,
   create: (ctx) => createBjt(-1, ctx),
 };

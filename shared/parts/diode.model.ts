@@ -1,7 +1,7 @@
 import type { DeviceModel } from '../engine/device';
 import { criticalVoltage, junctionParams, scaleSaturationCurrent, type JunctionParams } from '../engine/junction';
 import type { ParamsOf } from '../sheet/schema';
-import { fmt, junctionDevice, saturationCurrentProblem } from './model-helpers';
+import { fmt, junctionDevice, saturationCurrentProblem, sharpnessProblem } from './model-helpers';
 
 export function diodeJunction(p: ParamsOf<'diode'>, temperatureK: number, vt: number): JunctionParams {
   const nvt = p.emissionCoefficient * vt;
@@ -11,7 +11,10 @@ export function diodeJunction(p: ParamsOf<'diode'>, temperatureK: number, vt: nu
 
 export const diodeModel: DeviceModel<ParamsOf<'diode'>> = {
   topology: () => [{ kind: 'resistive', a: 0, b: 1 }],
-  check: (p, env) => saturationCurrentProblem('saturationCurrent', diodeJunction(p, env.temperatureK, env.vt).is, env.temperatureC),
+  check: (p, env) => [
+    ...sharpnessProblem('emissionCoefficient', p.emissionCoefficient * env.vt, 'n·V_T'),
+    ...saturationCurrentProblem('saturationCurrent', diodeJunction(p, env.temperatureK, env.vt).is, env.temperatureC),
+  ],
   create({ partId, params, env, pins, alloc }) {
     const jp = diodeJunction(params, env.temperatureK, env.vt);
     return junctionDevice(partId, pins, jp, params.seriesResistance, alloc, criticalVoltage(jp.nvt, jp.is), (_x, pv, pi) => {

@@ -1,7 +1,7 @@
 import type { DeviceModel } from '../engine/device';
 import { criticalVoltage, junctionParams, type JunctionParams } from '../engine/junction';
 import type { ParamsOf } from '../sheet/schema';
-import { fmt, junctionDevice } from './model-helpers';
+import { fmt, junctionDevice, sharpnessProblem } from './model-helpers';
 
 /** Junction voltage at the test current, at temperature: V_F + tc·(T − 25) − I_T·R_S. */
 function junctionVoltageAtTest(p: ParamsOf<'led'>, temperatureC: number): number {
@@ -18,6 +18,8 @@ export function ledJunction(p: ParamsOf<'led'>, env: { temperatureC: number; vt:
 export const ledModel: DeviceModel<ParamsOf<'led'>> = {
   topology: () => [{ kind: 'resistive', a: 0, b: 1 }],
   check(p, env) {
+    const sharp = sharpnessProblem('emissionCoefficient', p.emissionCoefficient * env.vt, 'n·V_T');
+    if (sharp.length) return sharp;
     const vj = junctionVoltageAtTest(p, env.temperatureC);
     if (!(vj > 0)) {
       const vf = p.forwardVoltage + p.forwardVoltageTempco * (env.temperatureC - 25);

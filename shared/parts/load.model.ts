@@ -54,9 +54,12 @@ export const loadModel: DeviceModel<ParamsOf<'load'>> = {
         s.nonlinear([pos, neg], [i, -i], [[pos, neg, v]], [[g], [-g]]);
       },
       residual(x, sink, _g, scale) {
-        const { i } = powerLoadCurrent(P * scale, vmin, nodeV(x, pos) - nodeV(x, neg));
-        sink.add(pos, i);
-        sink.add(neg, -i);
+        const vp = nodeV(x, pos);
+        const vn = nodeV(x, neg);
+        const { i, g } = powerLoadCurrent(P * scale, vmin, vp - vn);
+        const size = Math.abs(i) + Math.abs(g) * (Math.abs(vp) + Math.abs(vn));
+        sink.add(pos, i, size);
+        sink.add(neg, -i, size);
       },
       pinCurrents(x) {
         const { i } = powerLoadCurrent(P, vmin, nodeV(x, pos) - nodeV(x, neg));

@@ -37,9 +37,12 @@ export function resistanceElement(a: number, b: number, r: number, alloc: Alloca
       s.conductance(a, b, g);
     },
     residual(x, sink) {
-      const i = g * (nodeV(x, a) - nodeV(x, b));
-      sink.add(a, i);
-      sink.add(b, -i);
+      const va = nodeV(x, a);
+      const vb = nodeV(x, b);
+      const i = g * (va - vb);
+      const scale = g * (Math.abs(va) + Math.abs(vb));
+      sink.add(a, i, scale);
+      sink.add(b, -i, scale);
     },
     current: (x) => g * (nodeV(x, a) - nodeV(x, b)),
   };
@@ -118,9 +121,12 @@ export function junctionDevice(
     },
     residual(x, sink, gmin) {
       rs?.residual(x, sink);
-      const { i } = junctionCurrent(jp, nodeV(x, j) - nodeV(x, ca), gmin);
-      sink.add(j, i);
-      sink.add(ca, -i);
+      const vj = nodeV(x, j);
+      const vc = nodeV(x, ca);
+      const { i, g } = junctionCurrent(jp, vj - vc, gmin);
+      const scale = Math.abs(i) + g * (Math.abs(vj) + Math.abs(vc));
+      sink.add(j, i, scale);
+      sink.add(ca, -i, scale);
     },
     pinCurrents(x, gmin) {
       const i = rs ? rs.current(x) : junctionCurrent(jp, nodeV(x, an) - nodeV(x, ca), gmin).i;
@@ -167,6 +173,18 @@ export function saturationCurrentProblem(field: string, is: number, temperatureC
       `gives a saturation current of ${Number.isFinite(is) ? is.toExponential(2) : String(is)} A${at}, outside the ${min.toExponential(0)} A to ${max.toExponential(0)} A the junction equations can represent. Check the value${at ? '; the semiconductor models are meant for about −55 °C to 150 °C (common practice for silicon parts)' : ''}`,
     ],
   ];
+}
+
+/**
+ * The smallest voltage scale (V) an exponential may have: n·V_T, or a Zener's r_Z·I_ZT. Sharper,
+ * one ulp of a node voltage moves the current by many e-folds and no iteration can settle.
+ */
+export const MIN_EXPONENTIAL_SCALE = 1e-12;
+
+/** Why an exponential's voltage scale is too sharp to solve, or nothing. */
+export function sharpnessProblem(field: string, scale: number, what: string): Array<[string, string]> {
+  if (scale >= MIN_EXPONENTIAL_SCALE) return [];
+  return [[field, `gives ${what} of ${scale.toExponential(2)} V, a sharper exponential than double-precision arithmetic can follow (at least ${MIN_EXPONENTIAL_SCALE} V); real parts are many orders of magnitude softer`]];
 }
 
 /** Power-rating warnings: danger above the rating, caution above 50 % of it. */

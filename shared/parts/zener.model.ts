@@ -1,7 +1,7 @@
 import type { DeviceModel } from '../engine/device';
 import { criticalVoltage, junctionParams, scaleSaturationCurrent, type JunctionParams } from '../engine/junction';
 import type { ParamsOf } from '../sheet/schema';
-import { fmt, junctionDevice, powerRatingWarnings, saturationCurrentProblem } from './model-helpers';
+import { fmt, junctionDevice, powerRatingWarnings, saturationCurrentProblem, sharpnessProblem } from './model-helpers';
 
 /**
  * Reverse breakdown passing testCurrent at zenerVoltage(T) with dynamic resistance zenerResistance
@@ -19,7 +19,11 @@ export const zenerModel: DeviceModel<ParamsOf<'zener'>> = {
   check(p, env) {
     const vz = p.zenerVoltage + p.zenerTempco * (env.temperatureC - 25);
     if (!(vz > 0)) return [['zenerTempco', `gives a Zener voltage of ${fmt(vz, 'V')} at ${env.temperatureC} °C`]];
-    return saturationCurrentProblem('saturationCurrent', zenerJunction(p, env).is, env.temperatureC);
+    return [
+      ...sharpnessProblem('zenerResistance', p.zenerResistance * p.testCurrent, 'a knee (zenerResistance × testCurrent)'),
+      ...sharpnessProblem('emissionCoefficient', p.emissionCoefficient * env.vt, 'n·V_T'),
+      ...saturationCurrentProblem('saturationCurrent', zenerJunction(p, env).is, env.temperatureC),
+    ];
   },
   create({ partId, params, env, pins, alloc }) {
     const jp = zenerJunction(params, env);

@@ -17,6 +17,9 @@ export interface Tolerances {
   /** device laws: |i − law| ≤ relative·|law| + absolute (+ the rounding of the pin voltages) */
   lawRelative: number;
   lawAbsolute: number;
+  /** voltage constraints (sources, 0 Ω links): |error| ≤ relative·(|V| + |R·i| + |v|) + absolute, V */
+  kvlRelative?: number;
+  kvlAbsolute?: number;
 }
 
 export const DEFAULT_TOLERANCES: Tolerances = { kclRelative: 1e-9, kclAbsolute: 1e-15, lawRelative: 1e-9, lawAbsolute: 1e-15 };
@@ -160,7 +163,7 @@ export function checkCircuitLaws(sheetInput: unknown, r: SolveSuccess, tol: Tole
       const V = p.params.voltage as number;
       const R = (p.params.internalResistance as number) < 1e-6 ? 0 : (p.params.internalResistance as number);
       const err = v[0] - v[1] - R * cur[0] - V;
-      const t = 1e-12 * (Math.abs(V) + Math.abs(R * cur[0]) + vScale) + 1e-15;
+      const t = (tol.kvlRelative ?? 1e-12) * (Math.abs(V) + Math.abs(R * cur[0]) + vScale) + (tol.kvlAbsolute ?? 1e-15);
       if (Math.abs(err) > t) violations.push(`source ${p.id}: v(pos) − v(neg) − R·i − V = ${err} V`);
       continue;
     }
@@ -175,7 +178,9 @@ export function checkCircuitLaws(sheetInput: unknown, r: SolveSuccess, tol: Tole
     }
     // how far the rounding of the pin voltages alone moves the current, and gmin (1e-12 S) when a
     // node held only by reverse-biased junctions keeps it (docs/engine.md, "gmin")
-    const rounding = 16 * eps * law.slope * vScale + 2e-12 * vScale;
+    // a law too sharp for its own slope to be a number (e.g. a 5e-324 Ω knee) weighs nothing here
+    const slope = Number.isFinite(law.slope) ? law.slope : 0;
+    const rounding = 16 * eps * slope * vScale + 2e-12 * vScale;
     pins.forEach((_, k) => {
       const n = netOf.get(`${p.id}.${pins[k]}`)!;
       noise.set(n, (noise.get(n) ?? 0) + 16 * eps * law.slope * vScale);
@@ -190,7 +195,7 @@ export function checkCircuitLaws(sheetInput: unknown, r: SolveSuccess, tol: Tole
     if (law.constraints.length) ideal.push(pins.map((pin) => netOf.get(`${p.id}.${pin}`)!));
     for (const [a, b, c] of law.constraints) {
       const err = v[a] - v[b] - c;
-      if (Math.abs(err) > 1e-12 * vScale + 1e-15) violations.push(`part ${p.id}: ideal link with ${err} V across it`);
+      if (Math.abs(err) > (tol.kvlRelative ?? 1e-12) * vScale + (tol.kvlAbsolute ?? 1e-15)) violations.push(`part ${p.id}: ideal link with ${err} V across it`);
     }
   }
   for (let pass = 0; pass < 4; pass++)
@@ -198,8 +203,12 @@ export function checkCircuitLaws(sheetInput: unknown, r: SolveSuccess, tol: Tole
       const m = Math.max(...nets.map((n) => noise.get(n) ?? 0));
       for (const n of nets) noise.set(n, m);
     }
+  // the ground net's balance is minus the sum of all the others, so it inherits their tolerances
+  const tolOf = (n: number) => tol.kclRelative * (big.get(n) ?? 0) + tol.kclAbsolute + (noise.get(n) ?? 0);
+  let others = 0;
+  for (const n of sum.keys()) if (n !== -1) others += tolOf(n);
   for (const [n, s] of sum) {
-    const t = tol.kclRelative * (big.get(n) ?? 0) + tol.kclAbsolute + (noise.get(n) ?? 0);
+    const t = tolOf(n) + (n === -1 ? others : 0);
     const q = Math.abs(s) / t;
     worstKcl = Math.max(worstKcl, q);
     if (!(q <= 1)) violations.push(`KCL at net ${n === -1 ? '0' : `#${n}`}: currents sum to ${s} A (largest ${big.get(n)} A)`);
