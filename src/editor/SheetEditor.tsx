@@ -101,7 +101,7 @@ function EditorScreen({ editor, loaded, initialSource }: { editor: Editor; loade
       const id = route.replace(/^\/sheets\//, '');
       const next = resolveSheetSource(id);
       if (next) sourceRef.current = next;
-      setNotice('Saved as your local sheet.');
+      setNotice('Saved as your local sheet; any earlier local sheet is kept as a backup.');
       navigate(route, { replace: true, state: { continuedFrom: initialSource.key } });
     },
     [navigate, initialSource.key],
@@ -125,7 +125,7 @@ function EditorScreen({ editor, loaded, initialSource }: { editor: Editor; loade
   return (
     <div className="flex h-full min-h-0 flex-col" data-testid="sheet-editor">
       <Toolbar title={loaded.title} notice={notice} status={autosave.status} />
-      <div className="grid min-h-0 flex-1 grid-cols-[12.5rem_minmax(0,1fr)_23rem] max-xl:grid-cols-[10.5rem_minmax(0,1fr)_19.5rem]">
+      <div className="grid min-h-0 flex-1 grid-cols-[12.5rem_minmax(0,1fr)_23rem] max-xl:grid-cols-[9.5rem_minmax(0,1fr)_19.5rem]">
         <div className="min-h-0 border-r border-rule bg-panel">
           <Palette />
         </div>

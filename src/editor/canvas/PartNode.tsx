@@ -9,7 +9,8 @@ import { memo, useMemo } from 'react';
 import { Handle, type NodeProps } from '@xyflow/react';
 import { useEditorState, useSolveState } from '../EditorContext';
 import { PartSymbol } from '../symbols/PartSymbol';
-import { rotatedPin, rotatedSize, SYMBOL_GEOMETRY, type Side } from '../symbols/geometry';
+import { netLabelFlagEnd, rotatedPin, SYMBOL_GEOMETRY, type Side } from '../symbols/geometry';
+import { labelSide, type LabelSide } from './labelPlacement';
 import { SIDE_TO_HANDLE, type PartFlowNode } from './flowAdapter';
 import { currentText, powerText, valueText } from './partLabels';
 import { severityRank } from '../solve/solveView';
@@ -22,16 +23,7 @@ import type { Part } from '../../../shared/sheet';
 import type { SymbolStyle } from '../model/scopes';
 import { partById } from '../store/partIndex';
 
-type LabelSide = 'above' | 'below' | 'left' | 'right';
-
 const OPPOSITE: Record<Side, Side> = { left: 'right', right: 'left', top: 'bottom', bottom: 'top' };
-
-function labelSide(part: Part): LabelSide {
-  const r = part.rotation ?? 0;
-  if (part.type === 'potentiometer') return (['below', 'left', 'above', 'right'] as const)[r / 90];
-  const { width, height } = rotatedSize(part.type, r);
-  return width > height ? 'above' : 'right';
-}
 
 const LABEL_STYLE: Record<LabelSide, string> = {
   above: 'bottom-full left-1/2 -translate-x-1/2 mb-0.5 items-center text-center',
@@ -51,6 +43,7 @@ const PinTag = memo(function PinTag({ pinRef, side, x, y, onLabel }: { pinRef: s
 const PartPins = memo(function PartPins({ part, w, h }: { part: Part; w: number; h: number }) {
   const { wireCounts } = useCanvasDerived();
   const rotation = part.rotation ?? 0;
+  const flagEnd = part.type === 'net_label' ? netLabelFlagEnd(String((part.params as { name?: unknown }).name ?? '')) : 0;
   return Object.keys(SYMBOL_GEOMETRY[part.type].pins).map((pin) => {
     const p = rotatedPin(part.type, pin, rotation)!;
     const ref = `${part.id}.${pin}`;
@@ -72,8 +65,9 @@ const PartPins = memo(function PartPins({ part, w, h }: { part: Part; w: number;
           <div className="pointer-events-none absolute h-[7px] w-[7px] -translate-x-1/2 -translate-y-1/2 rounded-full bg-wire" style={{ left: x, top: y }} />
         )}
         {part.type === 'net_label' ? (
-          // on a net label the flag names the net: put the voltage past the flag's far end
-          <PinTag pinRef={ref} side={OPPOSITE[p.side]} x={w / 2 - p.x * 0.9} y={h / 2 - p.y * 0.9} onLabel />
+          // on a net label the flag names the net: put the voltage past the flag's far end (the
+          // pin is 40 units from the centre, the flag runs the other way for as long as the name)
+          <PinTag pinRef={ref} side={OPPOSITE[p.side]} x={w / 2 - (p.x / 40) * (flagEnd + 2)} y={h / 2 - (p.y / 40) * (flagEnd + 2)} onLabel />
         ) : (
           <PinTag pinRef={ref} side={p.side} x={x} y={y} onLabel={false} />
         )}
@@ -86,9 +80,13 @@ const Symbol = memo(function Symbol({ part, style }: { part: Part; style: Symbol
   return <PartSymbol type={part.type} rotation={part.rotation ?? 0} style={style} params={part.params as Record<string, unknown>} />;
 });
 
-/** "1.2 mA · 14 mW" for the part, or "" (no solve yet, nothing to say). */
+/**
+ * "1.2 mA · 14 mW" for the part, or "" (no solve yet, nothing to say). A source's "delivers …"
+ * goes on a line of its own: the label stays narrow enough not to run into the next column.
+ */
 function readingText(part: Part, r: PartResult | undefined): string {
-  return [currentText(part, r), powerText(part, r)].filter(Boolean).join(' · ');
+  const source = part.type === 'dc_voltage_source' || part.type === 'dc_current_source';
+  return [currentText(part, r), powerText(part, r)].filter(Boolean).join(source ? '\n' : ' · ');
 }
 
 /** The reading line under a part's value: written live (useLiveDom), hidden while empty. */
@@ -99,7 +97,7 @@ function ReadingLine({ part }: { part: Part }) {
     (s) => s.result?.parts[part.id],
     (el, r) => setText(el, readingText(part, r)),
   );
-  return <span ref={line} className="num text-[10px] text-ink/80 empty:hidden" data-testid={`part-reading-${part.id}`} />;
+  return <span ref={line} className="num whitespace-pre text-[10px] text-ink/80 empty:hidden" data-testid={`part-reading-${part.id}`} />;
 }
 
 const PartLabel = memo(function PartLabel({ part }: { part: Part }) {
@@ -107,7 +105,7 @@ const PartLabel = memo(function PartLabel({ part }: { part: Part }) {
   const { showReadings } = useCanvasDerived();
   const value = useMemo(() => valueText(part), [part]);
   return (
-    <div className={`tl-label pointer-events-none absolute flex flex-col whitespace-nowrap leading-tight ${LABEL_STYLE[labelSide(part)]}`}>
+    <div className={`tl-label pointer-events-none absolute flex flex-col whitespace-nowrap leading-tight ${LABEL_STYLE[labelSide(part.type, part.rotation ?? 0)]}`}>
       <span className="num text-[11px] font-semibold text-ink">
         {part.id}
         {corner && <span className="ml-1 rounded-sm bg-sunken px-1 text-[9px] font-semibold uppercase text-caution">{corner}</span>}

@@ -22,11 +22,10 @@ import { WireEdge } from './WireEdge';
 import { PartSymbol } from '../symbols/PartSymbol';
 import { GRID, snapToGrid } from '../symbols/geometry';
 import { notify } from '../notices';
+import { useFitSchematic, useInitialFit } from './fitSchematic';
 
 const nodeTypes = { part: PartNode };
 const edgeTypes = { wire: WireEdge };
-/** Zoom to fit, but never so far out that values become unreadable (pan for the rest). */
-export const FIT = { padding: 0.2, maxZoom: 1.4, minZoom: 0.75 };
 export const PART_DRAG_MIME = 'application/x-tapline-part';
 const SNAP_GRID: [number, number] = [GRID, GRID];
 const PAN_BUTTONS = [1, 2];
@@ -43,6 +42,7 @@ export const SchematicCanvas = memo(function SchematicCanvas({ showReadings }: {
   const selection = useEditorState((s) => s.session.selection);
   const [ghost, setGhost] = useState<{ x: number; y: number } | null>(null);
 
+  useInitialFit(useFitSchematic());
   const mapNodes = useMemo(createNodeMapper, []);
   const mapEdges = useMemo(createEdgeMapper, []);
   const nodes = useMemo(() => mapNodes(parts, new Set(selection.parts), readOnly), [mapNodes, parts, selection.parts, readOnly]);
@@ -184,8 +184,6 @@ export const SchematicCanvas = memo(function SchematicCanvas({ showReadings }: {
           elevateEdgesOnSelect
           minZoom={0.2}
           maxZoom={4}
-          fitView
-          fitViewOptions={FIT}
           aria-label="Schematic canvas"
         >
           <Background id="minor" variant={BackgroundVariant.Dots} gap={GRID} size={1.3} color="var(--tl-rule)" />

@@ -7,7 +7,7 @@ import { commandFor, PLACE_KEYS } from './shortcuts';
 import { GRID } from '../symbols/geometry';
 import type { Fragment } from '../store/commands';
 import { notify } from '../notices';
-import { FIT } from '../canvas/SchematicCanvas';
+import { useFitSchematic } from '../canvas/fitSchematic';
 import type { PartType } from '../../../shared/parts/specs';
 import { parseSheet } from '../../../shared/sheet';
 
@@ -39,6 +39,7 @@ const PLACE_BY_KEY = new Map(Object.entries(PLACE_KEYS).map(([t, k]) => [k, t as
 
 export function useEditorShortcuts(editor: Editor, h: ShortcutHandlers): void {
   const rf = useReactFlow();
+  const fit = useFitSchematic();
   useEffect(() => {
     const nudge = (dx: number, dy: number) => {
       const ids = editor.getSession().selection.parts;
@@ -86,7 +87,7 @@ export function useEditorShortcuts(editor: Editor, h: ShortcutHandlers): void {
         case 'delete': return a.deleteSelection();
         case 'rotateCw': return a.rotateSelection(1);
         case 'rotateCcw': return a.rotateSelection(-1);
-        case 'fit': return void rf.fitView(FIT);
+        case 'fit': return fit();
         case 'zoomIn': return void rf.zoomIn();
         case 'zoomOut': return void rf.zoomOut();
         case 'escape':
@@ -143,5 +144,5 @@ export function useEditorShortcuts(editor: Editor, h: ShortcutHandlers): void {
       document.removeEventListener('cut', cut);
       document.removeEventListener('paste', onPaste);
     };
-  }, [editor, rf, h]);
+  }, [editor, rf, h, fit]);
 }

@@ -25,6 +25,28 @@ const SHORT: Partial<Record<PartType, string>> = {
   net_label: 'Net label',
 };
 
+/**
+ * Names for the narrow palette (below 1280 px): trade abbreviations where they exist. The button's
+ * accessible name and tooltip keep the full name.
+ */
+const COMPACT: Record<PartType, string> = {
+  resistor: 'Resistor',
+  potentiometer: 'Pot',
+  ntc: 'NTC',
+  ldr: 'LDR',
+  load: 'Load',
+  switch: 'Switch',
+  dc_voltage_source: 'V source',
+  dc_current_source: 'I source',
+  diode: 'Diode',
+  zener: 'Zener',
+  led: 'LED',
+  npn: 'NPN',
+  pnp: 'PNP',
+  ground: 'Ground',
+  net_label: 'Net label',
+};
+
 export function paletteLabel(type: PartType): string {
   return SHORT[type] ?? partSpecs[type].label;
 }
@@ -61,13 +83,14 @@ export const Palette = memo(function Palette() {
                     // Named by its visible label (WCAG 2.5.3, label in name); the symbol and the key hint
                     // are hidden from the name, the key is announced through aria-keyshortcuts.
                     aria-keyshortcuts={key}
-                    title={`${partSpecs[type].description}${key ? ` (key ${key})` : ''}`}
+                    title={`${paletteLabel(type)}: ${partSpecs[type].description}${key ? ` (key ${key})` : ''}`}
                     data-testid={`palette-${type}`}
                   >
-                    <span className={`flex h-7 w-10 shrink-0 items-center justify-center ${active ? '[&_.sym-body]:fill-transparent! [&_.tl-symbol]:text-accent-ink' : ''}`}>
+                    <span className={`flex h-7 w-10 shrink-0 items-center justify-center max-xl:w-8 ${active ? '[&_.sym-body]:fill-transparent! [&_.tl-symbol]:text-accent-ink' : ''}`}>
                       <PartSymbol type={type} style={style} scale={type === 'ground' ? 0.55 : 0.42} />
                     </span>
-                    <span className="min-w-0 flex-1 truncate">{paletteLabel(type)}</span>
+                    <span className="min-w-0 flex-1 truncate max-xl:hidden">{paletteLabel(type)}</span>
+                    <span className="min-w-0 flex-1 truncate xl:hidden" aria-hidden="true">{COMPACT[type]}</span>
                     {key && (
                       <kbd aria-hidden="true" className={`num rounded border px-1 text-[10px] ${active ? 'border-accent-ink/40' : 'border-rule text-ink-muted'}`}>{key}</kbd>
                     )}

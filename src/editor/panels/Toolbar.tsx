@@ -8,7 +8,7 @@ import { useExtensionRegistry } from '../extensions';
 import { useEditorUi } from '../uiState';
 import { listExamples } from '../sources/exampleSources';
 import type { SaveStatus } from '../useAutosave';
-import { FIT } from '../canvas/SchematicCanvas';
+import { useFitSchematic } from '../canvas/fitSchematic';
 
 function SaveBadge({ status }: { status: SaveStatus }) {
   const text =
@@ -57,6 +57,7 @@ const Sep = () => <span className="mx-1 h-5 w-px bg-rule" aria-hidden="true" />;
 export const Toolbar = memo(function Toolbar({ title, notice, status }: { title: string; notice?: string; status: SaveStatus }) {
   const editor = useEditor();
   const rf = useReactFlow();
+  const fit = useFitSchematic();
   const history = useEditorState((s) => s.history);
   const selection = useEditorState((s) => s.session.selection);
   const readOnly = useEditorState((s) => s.session.readOnly);
@@ -86,7 +87,7 @@ export const Toolbar = memo(function Toolbar({ title, notice, status }: { title:
         <Btn label="Delete selection (Delete)" onClick={() => editor.actions.deleteSelection()} disabled={!hasSel || readOnly} testId="delete">✕</Btn>
         <Sep />
         <Btn label="Zoom out (−)" onClick={() => void rf.zoomOut()}>−</Btn>
-        <Btn label="Zoom to fit (F)" onClick={() => void rf.fitView(FIT)} testId="zoom-fit">⤢</Btn>
+        <Btn label="Zoom to fit (F)" onClick={fit} testId="zoom-fit">⤢</Btn>
         <Btn label="Zoom in (+)" onClick={() => void rf.zoomIn()}>+</Btn>
         <Sep />
         <Btn label="Show readings on parts (V)" pressed={ui.showReadings} onClick={() => ui.setPrefs({ showReadings: !ui.showReadings })} testId="toggle-readings">

@@ -9,6 +9,8 @@ import type { SolveResult } from './resultTypes';
 
 export interface SolverPort {
   solve(sheet: Sheet): Promise<SolveResult>;
+  /** the same, with the solve's own time in the worker, ms (the round trip says little about the sheet) */
+  solveTimed?(sheet: Sheet): Promise<{ result: SolveResult; ms: number }>;
 }
 
 export interface SolverHandle {
@@ -22,7 +24,7 @@ export interface SolveOutcome {
   /** the sheet that was solved */
   sheet: Sheet;
   result: SolveResult;
-  /** wall time of the solve, ms (for the worker: request to answer) */
+  /** time of the solve, ms (the worker's own when its port reports it, else request to answer) */
   ms: number;
   /** where it was solved: on the calling thread (inline) or in the worker */
   where: 'inline' | 'worker';
@@ -107,13 +109,15 @@ export class LatestWinsSolver {
     const generation = this.generation;
     this.inFlight = { seq: job.seq, started, generation };
     this.options.onBusy?.(true);
-    const settle = (result: SolveResult) => {
+    const settle = (result: SolveResult, ms = this.now() - started) => {
       if (this.disposed || generation !== this.generation) return; // from a worker we abandoned
       this.inFlight = null;
-      if (job.seq === this.latest) this.options.onResult({ seq: job.seq, sheet: job.sheet, result, ms: this.now() - started, where: 'worker' });
+      if (job.seq === this.latest) this.options.onResult({ seq: job.seq, sheet: job.sheet, result, ms, where: 'worker' });
       this.runPending();
     };
-    this.handle.port.solve(job.sheet).then(settle, (e: unknown) =>
+    const port = this.handle.port;
+    const answer = port.solveTimed ? port.solveTimed(job.sheet) : port.solve(job.sheet).then((result) => ({ result, ms: this.now() - started }));
+    answer.then(({ result, ms }) => settle(result, ms), (e: unknown) =>
       settle({
         ok: false,
         error: {

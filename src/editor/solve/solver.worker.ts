@@ -9,9 +9,11 @@ import type { SolveResult } from './resultTypes';
 const solver = createIncrementalSolver({ compileCircuit, solveOperatingPoint });
 
 const api = {
-  /** DC operating point of `sheet` (the contract's result shape). */
-  solve(sheet: Sheet): SolveResult {
-    return solver.solve(sheet);
+  /** DC operating point of `sheet` (the contract's result shape) and the solve's own time, ms. */
+  solve(sheet: Sheet): { result: SolveResult; ms: number } {
+    const started = performance.now();
+    const result = solver.solve(sheet);
+    return { result, ms: performance.now() - started };
   },
 };
 

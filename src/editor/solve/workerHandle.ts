@@ -8,7 +8,10 @@ export function startSolverWorker(): SolverHandle {
   const worker = new Worker(new URL('./solver.worker.ts', import.meta.url), { type: 'module', name: 'tapline-solver' });
   const remote = wrap<SolverWorkerApi>(worker);
   return {
-    port: { solve: (sheet) => remote.solve(sheet) },
+    port: {
+      solve: (sheet) => remote.solve(sheet).then((r) => r.result),
+      solveTimed: (sheet) => remote.solve(sheet),
+    },
     dispose: () => {
       remote[releaseProxy]();
       worker.terminate();

@@ -44,7 +44,8 @@ export function exampleSource(routeId: string): SheetSource | null {
         sheet: r.sheet,
         readOnly: false,
         title: r.sheet.title ?? name,
-        notice: 'Example (demo data). Your first change saves a copy as your local sheet; the previous local sheet is kept as a backup.',
+        // short enough for the toolbar at 1024 px; the backup is mentioned when it happens
+        notice: 'Example (demo data): editing saves it as your local sheet.',
       };
     },
     async save(sheet) {

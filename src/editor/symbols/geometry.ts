@@ -123,3 +123,14 @@ export function pinPosition(
 export function snapToGrid(v: number): number {
   return Math.round(v / GRID) * GRID;
 }
+
+/** Advance of one character of the label face (mono, 11 px: 0.6 em), canvas units. */
+const LABEL_CHAR = 6.6;
+
+/**
+ * Where a net label's flag ends, canvas units right of the part's centre in its unrotated frame:
+ * the flag grows with the name so the whole name shows (at least the 80-unit box of the symbol).
+ */
+export function netLabelFlagEnd(name: string): number {
+  return Math.max(36, -16 + name.length * LABEL_CHAR + 7);
+}

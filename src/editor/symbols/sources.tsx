@@ -2,6 +2,7 @@
 // conductor passes straight through and an ideal current source as a circle with a bar across
 // the conductor; IEEE 315 marks polarity or an arrow inside the circle instead.
 import type { SymbolProps } from './types';
+import { netLabelFlagEnd } from './geometry';
 
 function VerticalLeads() {
   return (
@@ -76,20 +77,23 @@ export function GroundSymbol() {
 /** A flag with the net's name; the text stays upright in any rotation. */
 export function NetLabelSymbol({ params, rotation }: SymbolProps) {
   const name = String(params.name ?? '');
-  const flipped = rotation === 180;
+  // the flag is as long as the name (it may reach past the symbol's box); the text runs along it
+  // and reads left to right or bottom to top, never upside down
+  const end = netLabelFlagEnd(name);
+  const mid = (-22 + end) / 2;
   return (
     <>
       <line x1={-40} y1={0} x2={-30} y2={0} className="sym-line" />
-      <path d="M-30 0 L-22 -10 L36 -10 L36 10 L-22 10 Z" className="sym-body" />
+      <path d={`M-30 0 L-22 -10 L${end} -10 L${end} 10 L-22 10 Z`} className="sym-body" />
       <text
-        x={7}
+        x={mid}
         y={0}
         textAnchor="middle"
         dominantBaseline="central"
         className="sym-label"
-        transform={flipped ? 'rotate(180 7 0)' : rotation === 90 || rotation === 270 ? `rotate(${-rotation} 7 0)` : undefined}
+        transform={rotation === 180 || rotation === 90 ? `rotate(180 ${mid} 0)` : undefined}
       >
-        {name.length > 8 ? `${name.slice(0, 7)}…` : name}
+        {name}
       </text>
     </>
   );

@@ -2,7 +2,8 @@
 // with a transform that fits every part, on the theme's paper colour, without the pan/zoom
 // controls, selection boxes or the sliders' browser chrome.
 import { toPng, toSvg } from 'html-to-image';
-import { getNodesBounds, getViewportForBounds, type Node } from '@xyflow/react';
+import { getViewportForBounds, type Node } from '@xyflow/react';
+import { schematicBounds } from '../../canvas/fitSchematic';
 
 export interface PictureOptions {
   /** output size, CSS px (PNG is drawn at pixelRatio times this) */
@@ -24,7 +25,7 @@ const keep = (n: HTMLElement) => !(n.classList && SKIP.some((c) => n.classList.c
 
 function frame(nodes: Node[], o: PictureOptions) {
   if (!nodes.length) throw new Error('The sheet is empty: place some parts before exporting a picture.');
-  const bounds = getNodesBounds(nodes);
+  const bounds = schematicBounds(nodes); // labels and readings included
   const pad = 40;
   const width = o.width ?? Math.min(2400, Math.max(480, Math.ceil(bounds.width + 2 * pad)));
   const height = o.height ?? Math.min(1800, Math.max(320, Math.ceil(bounds.height + 2 * pad)));
