@@ -238,9 +238,14 @@ describe('the database notice connection', () => {
     const projectId = await createSharedProject(live, ada, sheet(), [[ben, 'editor']]);
     const b = await openSheet(live.url, ben, projectId);
     const pool = live.s.t.database.pool;
-    const killed = await pool.query("select pg_terminate_backend(pid) from pg_stat_activity where datname = current_database() and query ilike 'listen tapline_realtime%'");
-    expect(killed.rowCount).toBeGreaterThan(0);
-    await eventually('the listener is back', async () => (await pool.query("select 1 from pg_stat_activity where datname = current_database() and query ilike 'listen tapline_realtime%'")).rowCount! > 0);
+    const listeners = "select pid from pg_stat_activity where datname = current_database() and query ilike 'listen tapline_realtime%'";
+    const before = (await pool.query<{ pid: number }>(listeners)).rows.map((r) => r.pid);
+    expect(before.length).toBeGreaterThan(0);
+    await pool.query('select pg_terminate_backend(pid) from unnest($1::int[]) as pid', [before]);
+    // A terminated backend can linger in pg_stat_activity with its last query, so wait for a new
+    // backend (another pid) that has finished running LISTEN (state idle).
+    await eventually('the listener is back', async () =>
+      (await pool.query(`${listeners} and state = 'idle' and not (pid = any($1::int[]))`, [before])).rowCount! > 0);
     const changed = sheet();
     changed.title = 'saved over REST after the reconnect';
     expect((await ada.patch(`/api/projects/${projectId}`).send({ sheet: changed, baseVersion: 1 })).status).toBe(200);
