@@ -110,7 +110,7 @@ export async function dragTimes(page: Page, pot: string, n: number): Promise<Ste
             if (!hit) return;
             clearTimeout(timer);
             mo.disconnect();
-            performance.mark(`seen-${i}`); // for traces (see DEVELOPERS.md); costs microseconds
+            performance.mark(`seen-${i}`); // marks a trace taken around the bench; costs microseconds
             void document.body.offsetHeight; // force style + layout of what changed
             resolve([dom - t0, performance.now() - t0]);
           });
