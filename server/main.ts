@@ -53,6 +53,11 @@ async function main(): Promise<void> {
     if (!mail) console.log('tapline: no SMTP_HOST set, so invitations cannot be sent.');
   });
   const stop = () => {
+    // A shutdown that hangs (a connection that never closes) must not keep the process alive.
+    setTimeout(() => {
+      console.error('tapline: shutdown did not finish in 10 s; exiting anyway.');
+      process.exit(1);
+    }, 10_000).unref();
     // socket.io first: it closes the HTTP server and releases its database connections before the pool ends.
     const closing = realtime.close();
     server.closeAllConnections();

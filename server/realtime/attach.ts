@@ -37,6 +37,29 @@ export interface Realtime {
 /** Largest message a client may send (bytes); as large as the REST API's JSON body. */
 const MAX_MESSAGE_BYTES = 1_000_000;
 
+/**
+ * Works around @socket.io/postgres-adapter 0.5.0, which keeps one pooled client checked out for
+ * LISTEN with no 'error' listener and never releases it when its connection ends (it just takes
+ * a new one). Without this, losing the database raised an uncaught 'error' that ended the
+ * process, and each outage leaked a pool slot, so `pool.end()` at shutdown never returned.
+ * Only that client (the one with a 'notification' listener) is released here; clients of
+ * `pool.query` are released by the pool itself.
+ */
+function keepAdapterPoolWhole(pool: pg.Pool): void {
+  const checkedOut = new Set<pg.PoolClient>();
+  pool.on('acquire', (client) => checkedOut.add(client));
+  pool.on('release', (_err, client) => checkedOut.delete(client));
+  pool.on('connect', (client) => {
+    client.on('error', (err) => console.error(`realtime adapter: connection lost: ${err.message}`));
+    client.once('end', () => {
+      const pooled = client as pg.PoolClient;
+      if (!checkedOut.has(pooled) || client.listenerCount('notification') === 0) return;
+      checkedOut.delete(pooled);
+      pooled.release(new Error('the LISTEN connection ended'));
+    });
+  });
+}
+
 export function attachRealtime(server: http.Server, deps: RealtimeDeps): Realtime {
   const { config, database } = deps;
   const clustered = deps.clustered ?? true;
@@ -44,6 +67,7 @@ export function attachRealtime(server: http.Server, deps: RealtimeDeps): Realtim
   // app's pool keeps its full size.
   const adapterPool = clustered ? new pg.Pool({ connectionString: config.DATABASE_URL, max: 3 }) : null;
   adapterPool?.on('error', (err) => console.error(`realtime adapter: idle client error: ${err.message}`));
+  if (adapterPool) keepAdapterPoolWhole(adapterPool);
   const io: RealtimeIo = new Server(server, {
     serveClient: false,
     maxHttpBufferSize: MAX_MESSAGE_BYTES,

@@ -11,6 +11,7 @@ import {
   type OpAck,
   type Peer,
 } from '../../shared/sync/protocol';
+import { findUnstorable } from '../sheets/storable-json';
 import { readForJoin, readRole } from './join-read';
 import type { ProjectQueues } from './project-queues';
 import type { Timings } from './timings';
@@ -98,6 +99,10 @@ export function registerHandlers(io: RealtimeIo, socket: RealtimeSocket, deps: {
     const reply = answer<OpAck>(ack);
     // 'unavailable' makes the client keep the batch and send it again a moment later.
     if (!bucket.take()) return reply({ ok: false, error: { code: 'unavailable', message: 'Too many changes at once; they are sent again in a moment.' } });
+    // Before zod: its recursive JSON schema overflows the stack on deep nesting, and text jsonb
+    // cannot store (NUL, lone surrogates) would fail the commit as 'unavailable', resent for ever.
+    const unstorable = findUnstorable(raw);
+    if (unstorable) return reply({ ok: false, error: { code: 'invalid_request', message: `The message is malformed: ${unstorable.message}` } });
     const parsed = OpRequestSchema.safeParse(raw);
     if (!parsed.success) return reply({ ok: false, error: { code: 'invalid_request', message: describeInvalid(parsed.error) } });
     const request = parsed.data;

@@ -38,6 +38,9 @@ export function findUnstorable(root: unknown): StorableProblem | null {
       if (p) return { path, message: `${where} ${p}.` };
     } else if (typeof value === 'number') {
       if (!Number.isFinite(value)) return { path, message: `${where} is a number too large to store (got ${value}).` };
+    } else if (ArrayBuffer.isView(value) || value instanceof ArrayBuffer) {
+      // Binary data (a socket message can carry it) is never JSON; not walked byte by byte.
+      return { path, message: `${where} is binary data, which a sheet cannot hold.` };
     } else if (value !== null && typeof value === 'object') {
       if (depth >= MAX_JSON_DEPTH) return { path, message: `${where} is nested more than ${MAX_JSON_DEPTH} levels deep; a sheet needs far fewer.` };
       const entries: [string | number, unknown][] = Array.isArray(value) ? value.map((v, i) => [i, v]) : Object.entries(value);

@@ -8,10 +8,8 @@
 //
 // Two servers: the app in this process as one process runs it (no cross-process adapter), and a
 // real `server/main.ts` process, which shares socket rooms through @socket.io/postgres-adapter.
-// The second is `it.fails`: the adapter (0.5.0) holds a pooled client with no 'error' listener,
-// so losing the database emits an unhandled 'error' and the process exits (bug reported for
-// server/realtime/attach.ts, which creates that pool). When that is fixed the test starts
-// failing; then drop the `.fails`.
+// (That adapter, 0.5.0, holds a pooled client with no 'error' listener: losing the database used
+// to end the process; server/realtime/attach.ts now gives its pool's clients one.)
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, expect, it } from 'vitest';
@@ -248,12 +246,6 @@ it('one server process without the cross-process adapter: unhealthy while Postgr
   await restartUnder(inProcessServer, 'tapline_fault_single');
 }, 240_000);
 
-it.fails('server/main.ts (clustered, PostgreSQL adapter): survives the restart the same way', async () => {
-  try {
-    await restartUnder(processServer, 'tapline_fault_process');
-  } catch (err) {
-    // Only the known failure counts as the expected one; any other makes this test red.
-    if (/the server died[\s\S]*Connection terminated unexpectedly/.test(String((err as Error).message))) throw err;
-    console.error('fault test failed for another reason than the known adapter bug:', err);
-  }
+it('server/main.ts (clustered, PostgreSQL adapter): survives the restart the same way', async () => {
+  await restartUnder(processServer, 'tapline_fault_process');
 }, 240_000);

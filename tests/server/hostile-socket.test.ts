@@ -4,10 +4,6 @@
 // nesting deep enough to overflow a recursive validator, text the database cannot store.
 // Each must get a structured refusal `{ ok: false, error: { code, message } }` (presence, which
 // has no answer, must be dropped without a broadcast) and leave the database unchanged.
-//
-// Two checks are marked `it.fails`: they describe the behaviour the protocol promises and the
-// server does not give yet (bugs in server/realtime/, reported to its owner). When they are fixed
-// these tests start failing; then drop the `.fails`.
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { io as connect, type Socket } from 'socket.io-client';
@@ -248,9 +244,9 @@ describe('sheet:op', () => {
 });
 
 describe('text the database cannot store, in an op', () => {
-  // Bug (server/realtime/commit.ts:88-96): the op passes validation, the INSERT into jsonb fails
-  // (22P05 for \u0000, 22P02 for a lone surrogate), and the batch is answered 'unavailable',
-  // which tells the client to send it again: it retries for ever. Expected: invalid_request.
+  // Once (server/realtime/commit.ts): the op passed validation, the INSERT into jsonb failed
+  // (22P05 for \u0000, 22P02 for a lone surrogate), and the batch was answered 'unavailable',
+  // which tells the client to send it again, for ever.
   it('leaves the database unchanged', async () => {
     const { s, version } = await joined();
     for (const value of ['a\u0000b', 'lone\uD800']) {
@@ -261,7 +257,7 @@ describe('text the database cannot store, in an op', () => {
     }
   });
 
-  it.fails('is refused as a bad request, not as "database unavailable, send again"', async () => {
+  it('is refused as a bad request, not as "database unavailable, send again"', async () => {
     const { s, version } = await joined();
     for (const value of ['a\u0000b', 'lone\uD800']) {
       const ack = await ask(s, 'sheet:op', { projectId, baseVersion: version, batchId: batchId(), ops: setTitle(value) });
@@ -288,11 +284,10 @@ describe('nesting deep enough to overflow a recursive validator', () => {
     await joined();
   });
 
-  // Bug (server/realtime/handlers.ts:59 and :101, via shared/sync/protocol.ts z.json()): zod's
-  // recursive JSON schema overflows the stack on ~100 kB of nested arrays inside the async
-  // handler; the rejection is unhandled, so without server/main.ts's unhandledRejection handler
-  // one message from any signed-in user ended the whole process (exit 1). The sender gets no ack.
-  it.fails('is answered with invalid_request', async () => {
+  // Once (server/realtime/handlers.ts, via shared/sync/protocol.ts z.json()): zod's recursive
+  // JSON schema overflowed the stack on ~100 kB of nested arrays inside the async handler; the
+  // rejection was unhandled, so one message from any signed-in user ended the whole process.
+  it('is answered with invalid_request', async () => {
     const { s } = await joined();
     const [, opText] = packets()[0];
     expectRefused(await rawAsk(s, 8001, opText), 'deep sheet:op', 'invalid_request');
