@@ -77,5 +77,10 @@ export async function startThrowawayCluster(): Promise<ThrowawayCluster> {
     },
   };
   cluster.start();
+  // A run stopped half-way (Ctrl-C, a crashed worker) must not leave a server running in /tmp.
+  process.once('exit', () => {
+    if (running) spawnSync(isRoot ? 'runuser' : path.join(bin, 'pg_ctl'), isRoot ? ['-u', 'postgres', '--', path.join(bin, 'pg_ctl'), 'stop', '-D', data, '-m', 'immediate'] : ['stop', '-D', data, '-m', 'immediate']);
+    fs.rmSync(base, { recursive: true, force: true });
+  });
   return cluster;
 }
