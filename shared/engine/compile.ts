@@ -197,8 +197,9 @@ function buildBase(sheet: Sheet): BaseInfo {
     if (!n.isGround && active[i]) netUnknown[i] = k++;
   });
   const solved = sheet.parts.filter((p) => !excluded.has(p.id));
-  // unknown params (kept in the file, ignored by the solver)
-  for (const part of solved) {
+  // unknown params (kept in the file, ignored by the solver), on every part: a misspelt param on a
+  // part not yet wired up is still worth knowing about
+  for (const part of sheet.parts) {
     const def = partCatalog[part.type];
     for (const key of Object.keys(part.params ?? {}))
       if (!def.params.some((p) => p.name === key))
@@ -701,9 +702,16 @@ function runStrategies(c: MnaCircuit, x0: Float64Array, opts: typeof DEFAULTS): 
   return { ok: false, iterations: total, last: best, ...(singular ? { singular } : {}), tried, exhausted: budgetLeft() <= 0 };
 }
 
+const unknownNames = new WeakMap<BaseInfo, Map<number, string>>();
+/** The net whose voltage is unknown i, or null (an internal node or a branch current). */
 function unknownName(base: BaseInfo, i: number): string | null {
-  for (let k = 0; k < base.netUnknown.length; k++) if (base.netUnknown[k] === i) return base.nets.nets[k].name;
-  return null;
+  let m = unknownNames.get(base);
+  if (!m) {
+    m = new Map();
+    for (let k = 0; k < base.netUnknown.length; k++) if (base.netUnknown[k] >= 0) m.set(base.netUnknown[k], base.nets.nets[k].name);
+    unknownNames.set(base, m);
+  }
+  return m.get(i) ?? null;
 }
 
 function describeFailure(o: StrategyOutcomeFail, inst: Instance, base: BaseInfo): SolveErrorInfo {
@@ -801,9 +809,17 @@ function assemble(
   const parts: Record<string, PartResult> = {};
   const warnings: SolveWarning[] = [...base.staticWarnings];
   const bad: string[] = [];
+  // static warnings by part, once (a filter per part costs parts × warnings)
+  const staticByPart = new Map<string, SolveWarning[]>();
+  for (const w of base.staticWarnings)
+    if (w.partId !== undefined) {
+      const list = staticByPart.get(w.partId) ?? [];
+      list.push(w);
+      staticByPart.set(w.partId, list);
+    }
   for (const part of base.sheet.parts) {
     const def = partCatalog[part.type];
-    const partWarnings: SolveWarning[] = base.staticWarnings.filter((w) => w.partId === part.id);
+    const partWarnings: SolveWarning[] = [...(staticByPart.get(part.id) ?? [])];
     if (base.excluded.has(part.id)) {
       setOwn(parts, part.id, { pinCurrents: Object.fromEntries(def.pins.map((p) => [p.name, 0])), power: 0, warnings: partWarnings });
       continue;

@@ -113,7 +113,8 @@ export class MnaCircuit {
   private updateRowScale(): void {
     for (let i = 0; i < this.size; i++) {
       const m = this.rowMax[i];
-      this.rowScale[i] = m > 0 && Number.isFinite(m) ? Math.pow(2, -Math.round(Math.log2(m))) : 1;
+      // within 2^±400: a row holding 1e308 Ω beside unit entries must not scale them into denormals
+      this.rowScale[i] = m > 0 && Number.isFinite(m) ? Math.pow(2, Math.max(-400, Math.min(400, -Math.round(Math.log2(m))))) : 1;
     }
   }
 

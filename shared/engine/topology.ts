@@ -22,18 +22,19 @@ export interface TopologyInput {
   parts: PartTopology[];
 }
 
+/** "a, b and c", or "a, b, … and 12 more" past `max` items. */
+function joinList(items: string[], max = 6): string {
+  if (items.length <= 1) return items.join('');
+  if (items.length > max) return `${items.slice(0, max).join(', ')} and ${items.length - max} more`;
+  return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
+}
+
 function listNames(names: string[], max = 6): string {
-  const q = names.slice(0, max).map((n) => `"${n}"`);
-  if (names.length > max) q.push(`and ${names.length - max} more`);
-  if (q.length <= 1) return q.join('');
-  return `${q.slice(0, -1).join(', ')} and ${q[q.length - 1]}`;
+  return joinList(names.slice(0, max + 1).map((n) => `"${n}"`).concat(names.slice(max + 1)), max);
 }
 
 function listParts(ids: string[], max = 6): string {
-  const q = ids.slice(0, max);
-  if (ids.length > max) q.push(`and ${ids.length - max} more`);
-  if (q.length <= 1) return q.join('');
-  return `${q.slice(0, -1).join(', ')} and ${q[q.length - 1]}`;
+  return joinList(ids, max);
 }
 
 function fmtV(v: number): string {
@@ -59,6 +60,10 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
   // union-find with offsets: pot[i] = v(i) − v(root(i))
   const parent = Array.from({ length: nNets }, (_, i) => i);
   const pot = new Float64Array(nNets);
+  // union by size keeps the trees shallow: a chain of 10⁴ sources would otherwise make every
+  // rootOf walk the whole chain
+  const size = new Int32Array(nNets).fill(1);
+  const byId = new Map(t.parts.map((p) => [p.partId, p] as const));
   // walk to the root accumulating the offsets
   const rootOf = (i: number): [number, number] => {
     let acc = 0;
@@ -89,10 +94,18 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
       const [ra, pa] = rootOf(na);
       const [rb, pb] = rootOf(nb);
       if (ra !== rb) {
-        // v(na) − v(nb) = value  →  attach rb under ra
-        // v(rb) = v(nb) − pb = v(na) − value − pb = v(ra) + pa − value − pb
-        parent[rb] = ra;
-        pot[rb] = pa - e.value - pb;
+        // v(na) − v(nb) = value; v(na) = v(ra) + pa, v(nb) = v(rb) + pb
+        if (size[ra] >= size[rb]) {
+          // v(rb) = v(ra) + pa − value − pb
+          parent[rb] = ra;
+          pot[rb] = pa - e.value - pb;
+          size[ra] += size[rb];
+        } else {
+          // v(ra) = v(rb) + pb + value − pa
+          parent[ra] = rb;
+          pot[ra] = pb + e.value - pa;
+          size[rb] += size[ra];
+        }
         vAdj[na].push({ to: nb, partId: p.partId, value: e.value });
         vAdj[nb].push({ to: na, partId: p.partId, value: -e.value });
         continue;
@@ -107,28 +120,29 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
             prev.set(ed.to, { from: q[h], partId: ed.partId });
             q.push(ed.to);
           }
-      const loopParts: string[] = [p.partId];
+      const inLoop = new Set<string>([p.partId]);
       const loopNets: number[] = [nb];
       for (let k = nb; k !== na; ) {
         const s = prev.get(k)!;
-        if (!loopParts.includes(s.partId)) loopParts.push(s.partId);
+        inLoop.add(s.partId);
         k = s.from;
         loopNets.push(k);
       }
+      const loopParts = [...inLoop];
       const implied = pa - pb; // v(na) − v(nb) already fixed by the others
       const mismatch = implied - e.value;
       const scale = Math.max(Math.abs(implied), Math.abs(e.value), 1e-3);
-      const sources = t.parts.filter((pp) => loopParts.includes(pp.partId) && pp.edges.some((ee) => ee.kind === 'voltage' && ee.source));
+      const sources = loopParts.map((id) => byId.get(id)!).filter((pp) => pp.edges.some((ee) => ee.kind === 'voltage' && ee.source));
       const nets = loopNets.map((n) => t.netNames[n]);
-      const described = loopParts.map((id) => {
-        const pp = t.parts.find((x) => x.partId === id)!;
+      const described = loopParts.slice(0, 7).map((id) => {
+        const pp = byId.get(id)!;
         return pp.valueText ? `${id} (${pp.valueText})` : id;
       });
       if (Math.abs(mismatch) > 1e-9 * scale) {
         const parallel = loopParts.length === 2 ? 'are in parallel' : 'form a loop';
         return {
           code: 'voltage_source_loop',
-          message: `${listParts(described)} ${parallel} but force different voltages (${fmtV(e.value)} against ${fmtV(implied)} between "${t.netNames[na]}" and "${t.netNames[nb]}"), so no current can satisfy them. Remove one, or give a source an internal resistance.`,
+          message: `${listParts(described.length < loopParts.length ? [...described, ...loopParts.slice(7)] : described)} ${parallel} but force different voltages (${fmtV(e.value)} against ${fmtV(implied)} between "${t.netNames[na]}" and "${t.netNames[nb]}"), so no current can satisfy them. Remove one, or give a source an internal resistance.`,
           parts: loopParts,
           nets,
         };
@@ -136,7 +150,7 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
       const what = sources.length === 0 ? 'ideal 0 Ω links' : sources.length === loopParts.length ? 'ideal voltage sources' : 'ideal voltage sources and 0 Ω links';
       return {
         code: 'voltage_source_loop',
-        message: `${listParts(described)} ${loopParts.length === 2 ? `are ${what} in parallel` : `form a loop of ${what}`}: the voltages agree, but how the current divides between them is undetermined. Give one of them ${sources.length ? 'an internal resistance' : 'a non-zero on-resistance'}, or remove one.`,
+        message: `${listParts(described.length < loopParts.length ? [...described, ...loopParts.slice(7)] : described)} ${loopParts.length === 2 ? `are ${what} in parallel` : `form a loop of ${what}`}: the voltages agree, but how the current divides between them is undetermined. Give one of them ${sources.length ? 'an internal resistance' : 'a non-zero on-resistance'}, or remove one.`,
         parts: loopParts,
         nets,
       };
@@ -173,13 +187,25 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
   for (let c = 0; c < nComp; c++) if (c !== gComp) floatingComps.push(c);
   if (!floatingComps.length) return null;
 
+  // nets and current sources per component, in one pass each (a loop per component over all
+  // nets and parts costs components × parts: 10⁸ steps for 10⁴ islands)
+  const netsOf: number[][] = Array.from({ length: nComp }, () => []);
+  for (let i = 0; i < nNets; i++) if (comp[i] >= 0 && t.active[i]) netsOf[comp[i]].push(i);
+  const feedingOf = new Map<number, PartTopology[]>();
+  for (const p of t.parts)
+    for (const e of p.edges) {
+      if (e.kind !== 'current') continue;
+      for (const c of new Set([comp[p.pinNets[e.a]], comp[p.pinNets[e.b]]])) {
+        if (c < 0) continue;
+        const list = feedingOf.get(c) ?? [];
+        if (!list.includes(p)) list.push(p);
+        feedingOf.set(c, list);
+      }
+    }
   // current sources feeding a component with no DC path: the more specific diagnosis first
   for (const c of floatingComps) {
-    const nets = [];
-    for (let i = 0; i < nNets; i++) if (comp[i] === c && t.active[i]) nets.push(i);
-    const feeding = t.parts.filter((p) =>
-      p.edges.some((e) => e.kind === 'current' && (comp[p.pinNets[e.a]] === c || comp[p.pinNets[e.b]] === c)),
-    );
+    const nets = netsOf[c];
+    const feeding = feedingOf.get(c) ?? [];
     if (feeding.length) {
       const netNames = nets.map((i) => t.netNames[i]);
       const others = new Set<string>();
@@ -198,11 +224,10 @@ export function checkTopology(t: TopologyInput): SolveErrorInfo | null {
   const allNets: string[] = [];
   const allParts = new Set<string>();
   for (const c of floatingComps)
-    for (let i = 0; i < nNets; i++)
-      if (comp[i] === c && t.active[i]) {
-        allNets.push(t.netNames[i]);
-        for (const pin of t.netPins[i]) if (!connectors.has(pin.split('.')[0])) allParts.add(pin.split('.')[0]);
-      }
+    for (const i of netsOf[c]) {
+      allNets.push(t.netNames[i]);
+      for (const pin of t.netPins[i]) if (!connectors.has(pin.split('.')[0])) allParts.add(pin.split('.')[0]);
+    }
   return {
     code: 'floating_net',
     message: `Net${allNets.length > 1 ? 's' : ''} ${listNames(allNets)} ${allNets.length > 1 ? 'have' : 'has'} no DC path to ground, so ${allNets.length > 1 ? 'their voltages are' : 'its voltage is'} undetermined (parts there: ${listParts([...allParts])}). Wire ${allNets.length > 1 ? 'them' : 'it'} to the rest of the circuit or add a resistor to ground.`,

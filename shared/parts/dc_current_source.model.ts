@@ -1,8 +1,10 @@
 import { GROUND, type DeviceModel } from '../engine/device';
 import type { ParamsOf } from '../sheet/schema';
+import { sourceLimitProblem } from './model-helpers';
 
 export const dcCurrentSourceModel: DeviceModel<ParamsOf<'dc_current_source'>> = {
   topology: (p) => [{ kind: 'current', a: 0, b: 1, value: p.current }],
+  check: (p) => sourceLimitProblem('current', p.current, 'A'),
   create({ partId, params, pins }) {
     const [pos, neg] = pins;
     const I = params.current;

@@ -1,6 +1,6 @@
 import { GROUND, nodeV, type Device, type DeviceModel } from '../engine/device';
 import type { ParamsOf } from '../sheet/schema';
-import { fmt, resistanceEdge, resistiveDevice } from './model-helpers';
+import { fmt, resistanceEdge, resistiveDevice, sourceLimitProblem } from './model-helpers';
 
 /** Constant-power current: P/v above minVoltage, the resistance minVoltage²/P below it. */
 export function powerLoadCurrent(P: number, vmin: number, v: number): { i: number; g: number } {
@@ -10,6 +10,7 @@ export function powerLoadCurrent(P: number, vmin: number, v: number): { i: numbe
 
 export const loadModel: DeviceModel<ParamsOf<'load'>> = {
   topology: (p) => (p.mode === 'current' ? [{ kind: 'current', a: 0, b: 1, value: -p.value }] : p.mode === 'resistance' ? [resistanceEdge(p.value)] : [{ kind: 'resistive', a: 0, b: 1 }]),
+  check: (p) => (p.mode === 'resistance' ? [] : sourceLimitProblem('value', p.value, p.mode === 'power' ? 'W' : 'A')),
   create({ partId, params, pins, alloc }): Device {
     const [pos, neg] = pins;
     const nodes = pins.filter((n) => n !== GROUND);

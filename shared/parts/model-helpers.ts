@@ -187,6 +187,19 @@ export function sharpnessProblem(field: string, scale: number, what: string): Ar
   return [[field, `gives ${what} of ${scale.toExponential(2)} V, a sharper exponential than double-precision arithmetic can follow (at least ${MIN_EXPONENTIAL_SCALE} V); real parts are many orders of magnitude softer`]];
 }
 
+/**
+ * Largest source voltage (V), current (A) or load power (W) the solve accepts. Beyond, the
+ * rounding of the huge values swamps every ordinary part beside them (a 1e200 A source made a 1 V
+ * source elsewhere read 0 V), and Tapline is for DC networks, not for astronomy.
+ */
+export const SOURCE_LIMIT = 1e12;
+
+/** Why a source or load value is beyond SOURCE_LIMIT, or nothing. */
+export function sourceLimitProblem(field: string, value: number, unit: string): Array<[string, string]> {
+  if (Math.abs(value) <= SOURCE_LIMIT) return [];
+  return [[field, `is ${value} ${unit}, beyond the ±${SOURCE_LIMIT} ${unit} the solver can hold beside ordinary parts; check the value and its unit (plain SI units: volts, amperes, watts)`]];
+}
+
 /** Power-rating warnings: danger above the rating, caution above 50 % of it. */
 export function powerRatingWarnings(partLabel: string, power: number, rating: number, what = 'dissipates'): DeviceWarning[] {
   if (power > rating)

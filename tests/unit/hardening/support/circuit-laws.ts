@@ -154,6 +154,11 @@ export function checkCircuitLaws(sheetInput: unknown, r: SolveSuccess, tol: Tole
       sum.set(n, (sum.get(n) ?? 0) + cur[k]);
       big.set(n, Math.max(big.get(n) ?? 0, Math.abs(cur[k])));
     });
+    if (p.type === 'potentiometer') {
+      // the wiper current is the difference of the two section currents, and rounds like them
+      const n = netOf.get(`${p.id}.w`)!;
+      big.set(n, Math.max(big.get(n) ?? 0, Math.abs(cur[0]), Math.abs(cur[2])));
+    }
     const pinSum = cur.reduce((a, b) => a + b, 0);
     const pinScale = Math.max(...cur.map(Math.abs));
     if (Math.abs(pinSum) > 1e-12 * pinScale + 1e-300) violations.push(`part ${p.id}: pin currents sum to ${pinSum} A`);
