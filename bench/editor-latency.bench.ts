@@ -199,8 +199,10 @@ function row(label: string, steps: Steps, drag: Drag): Record<string, string> {
 export async function run(): Promise<void> {
   const ex = largestPotExample();
   const ladder = potLadder(99);
-  const outDir = path.join(root, '.local/bench-dist');
-  await build({ root, logLevel: 'error', build: { outDir, emptyOutDir: true, sourcemap: false } });
+  // EDITOR_BENCH_DIST=dir measures an existing build instead (e.g. an older commit's, to compare)
+  const given = process.env.EDITOR_BENCH_DIST;
+  const outDir = given ? path.resolve(given) : path.join(root, '.local/bench-dist');
+  if (!given) await build({ root, logLevel: 'error', build: { outDir, emptyOutDir: true, sourcemap: false } });
   const server = await startStaticServer(outDir);
   const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS });
   try {

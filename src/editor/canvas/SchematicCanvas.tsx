@@ -2,8 +2,6 @@
 // React Flow never owns the parts or wires.
 import { memo, useCallback, useMemo, useState, type DragEvent, type MouseEvent } from 'react';
 import {
-  Background,
-  BackgroundVariant,
   ConnectionMode,
   ReactFlow,
   ViewportPortal,
@@ -19,6 +17,7 @@ import { CanvasDerivedContext } from './CanvasDerived';
 import { createEdgeMapper, createNodeMapper, partCenter, wireCounts, type PartFlowNode, type WireFlowEdge } from './flowAdapter';
 import { PartNode } from './PartNode';
 import { WireEdge } from './WireEdge';
+import { GridDots } from './GridDots';
 import { PartSymbol } from '../symbols/PartSymbol';
 import { GRID, snapToGrid } from '../symbols/geometry';
 import { notify } from '../notices';
@@ -186,7 +185,7 @@ export const SchematicCanvas = memo(function SchematicCanvas({ showReadings }: {
           maxZoom={4}
           aria-label="Schematic canvas"
         >
-          <Background id="minor" variant={BackgroundVariant.Dots} gap={GRID} size={1.3} color="var(--tl-rule)" />
+          <GridDots />
           {tool.kind === 'place' && ghost && (
             <ViewportPortal>
               <div
