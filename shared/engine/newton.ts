@@ -255,6 +255,21 @@ export class MnaCircuit {
    * or twice more. A nonlinear solve needs none: each Newton step re-evaluates the residual.
    */
   private refineLinear(x: Float64Array, run: NewtonRun): Float64Array {
+    return this.refine(x, run, (_i, r, scale) => Math.abs(r) > REFINE_ULPS * Number.EPSILON * scale);
+  }
+
+  /**
+   * At a converged Newton point: the convergence test looks at KCL rows only, so a branch
+   * equation (a source's v(pos) − v(neg) − R·i = V, a 0 Ω link) may still be off by the LU's
+   * normwise rounding, beside 1e9 A elsewhere by 1e-7 V. Refine when one is off by more than
+   * reltol·(its terms) + vntol; the refinement step is a Newton step in correction form.
+   */
+  private refineBranches(x: Float64Array, run: NewtonRun): Float64Array {
+    const { reltol, vntol } = this.tol;
+    return this.refine(x, run, (i, r, scale) => this.kinds[i] === UNKNOWN_BRANCH && Math.abs(r) > (reltol * scale + vntol) * this.rowScale[i]);
+  }
+
+  private refine(x: Float64Array, run: NewtonRun, needs: (row: number, residual: number, scale: number) => boolean): Float64Array {
     const n = this.size;
     for (let pass = 0; pass < 2; pass++) {
       const r = new Float64Array(n);
@@ -271,12 +286,19 @@ export class MnaCircuit {
         },
       });
       for (const d of this.devices) d.load(measure, x);
-      let worst = 0;
-      for (let i = 0; i < n; i++) worst = Math.max(worst, Math.abs(r[i]) / (REFINE_ULPS * Number.EPSILON * scale[i] + Number.MIN_VALUE));
-      if (!(worst > 1)) break;
+      if (run.shunt > 0)
+        for (let i = 0; i < n; i++)
+          if (this.kinds[i] === UNKNOWN_NODE) {
+            r[i] -= run.shunt * this.rowScale[i] * x[i];
+            scale[i] += Math.abs(run.shunt * this.rowScale[i] * x[i]);
+          }
+      let any = false;
+      for (let i = 0; i < n && !any; i++) any = needs(i, r[i], scale[i]);
+      if (!any) break;
       this.system.clear();
       const matrixOnly = this.stamper(run, flag, { add: (row, col, v) => this.system.add(row, col, v), addRhs() {} });
       for (const d of this.devices) d.load(matrixOnly, x);
+      if (run.shunt > 0) for (let i = 0; i < n; i++) if (this.kinds[i] === UNKNOWN_NODE) this.system.add(i, i, run.shunt * this.rowScale[i]);
       for (let i = 0; i < n; i++) this.system.addRhs(i, r[i]);
       const d = this.system.solve();
       if (!(d instanceof Float64Array) || !d.every(Number.isFinite)) break;
@@ -332,7 +354,7 @@ export class MnaCircuit {
       }
       prev = x;
       x = sol;
-      if (stepOk && !flag.limited && this.residualRatio(x, run).ratio <= 1) return { converged: true, x, prev, iterations: it };
+      if (stepOk && !flag.limited && this.residualRatio(x, run).ratio <= 1) return { converged: true, x: this.refineBranches(x, run), prev, iterations: it };
     }
     return { converged: false, x, prev, iterations: run.maxIterations };
   }

@@ -174,10 +174,11 @@ export function checkCircuitLaws(sheetInput: unknown, r: SolveSuccess, tol: Tole
     }
     const law = skipLaws.includes(p.id) ? null : deviceLaw(p.type, p.params, v, { temperatureC: sheet.conditions.temperatureC, illuminanceLux: sheet.conditions.illuminanceLux });
     if (!law) {
-      // no law to weigh the rounding with: allow for the current's own rounding
-      pins.forEach((pin, k) => {
+      // no law to weigh the rounding with: allow for the rounding of the part's largest current
+      // (a pin current may be the difference of two far larger ones, as a transistor's emitter)
+      pins.forEach((pin) => {
         const n = netOf.get(`${p.id}.${pin}`)!;
-        noise.set(n, (noise.get(n) ?? 0) + 16 * eps * Math.abs(cur[k]));
+        noise.set(n, (noise.get(n) ?? 0) + 16 * eps * pinScale);
       });
       continue;
     }
