@@ -2,7 +2,7 @@
 // each solve may override numeric params and conditions, and may warm-start from a previous result.
 import { partCatalog, type PartDefinition } from '../parts/index';
 import { fmt } from '../parts/model-helpers';
-import { paramProblem, parseSheet, type SheetIssue } from '../sheet/parse';
+import { describeValue, paramProblem, parseSheet, type SheetIssue } from '../sheet/parse';
 import { extractNets, type NetList } from '../sheet/nets';
 import { pinKey, type Conditions, type Part, type Sheet } from '../sheet/schema';
 import { celsiusToKelvin, thermalVoltage } from './constants';
@@ -427,7 +427,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     for (const [k, v] of [['temperatureC', cond.temperatureC], ['illuminanceLux', cond.illuminanceLux]] as const) {
       const bad = k === 'temperatureC' ? !(Number.isFinite(v) && v > -273.15) : !(Number.isFinite(v) && v >= 0);
       if (bad)
-        return failure({ code: 'invalid_parameter', message: `conditions.${k} must be ${k === 'temperatureC' ? 'a temperature above −273.15 °C' : 'zero or more lux'} (got ${v}).`, parts: [], nets: [] }, base.staticWarnings);
+        return failure({ code: 'invalid_parameter', message: `conditions.${k} must be ${k === 'temperatureC' ? 'a temperature above −273.15 °C' : 'zero or more lux'} (got ${describeValue(v)}).`, parts: [], nets: [] }, base.staticWarnings);
     }
     const overrides = so.paramOverrides;
     const hasOverrides = overrides !== undefined && Object.keys(overrides).length > 0;
