@@ -10,6 +10,7 @@ import { GROUND, type Device, type DeviceEnv, type TopologyEdge } from './device
 import { createLinearSystem, type LinearSolverKind, type LinearSystem, type LinearSystemFactory } from './linear/index';
 import { MnaCircuit, deviceMovement, UNKNOWN_BRANCH, UNKNOWN_NODE, type NewtonOutcome, type NewtonRun } from './newton';
 import { failure, type PartResult, type SolveErrorInfo, type SolveFailure, type SolveResult, type SolveStrategy, type SolveSuccess, type SolveWarning } from './result';
+import { adjointSensitivities, type ParamRef, type SensitivityOutput, type SensitivityReport } from './sensitivity';
 import { checkTopology, type PartTopology } from './topology';
 
 export interface SolveOptions {
@@ -72,6 +73,13 @@ export interface CompiledCircuit {
   pinCurrent(partId: string, pin: string): number;
   /** power absorbed by the part, W */
   partPower(partId: string): number;
+  /**
+   * Adjoint sensitivities at the last successful solve: dy/dp of one output for many params from
+   * one transposed solve (shared/engine/sensitivity.ts). `params` defaults to every param with a
+   * tolerance (resistances, NTC nominal resistances, supply voltages). Throws when there is no
+   * solution yet or the output names no such net, part or pin.
+   */
+  sensitivities(output: SensitivityOutput, params?: readonly ParamRef[]): SensitivityReport;
 }
 
 export type RawSolveResult = { ok: true; iterations: number } | SolveFailure;
@@ -101,6 +109,9 @@ interface Instance {
   topo: Map<string, TopologyEdge[]>;
   /** unknowns each part's device allocated, in order */
   allocs: Map<string, Array<{ kind: number; index: number }>>;
+  /** the params and conditions the devices were made with (overrides merged) */
+  paramsOf: (p: Part) => Record<string, unknown>;
+  cond: { temperatureC: number; illuminanceLux: number };
 }
 
 interface BaseInfo {
@@ -303,7 +314,7 @@ function instantiate(
   const signature = `${size}:${names.join(',')}:${pattern.length}:${h}`;
   const system = reuse && reuse.signature === signature ? reuse.system : createLinearSystem(opts.linearSolver, size, pattern);
   const circuit = new MnaCircuit(size, kindArr, devices, system, opts);
-  return { ok: true, inst: { devices, deviceById, deviceIndex, kinds: kindArr, circuit, signature, topo: topoById, allocs } };
+  return { ok: true, inst: { devices, deviceById, deviceIndex, kinds: kindArr, circuit, signature, topo: topoById, allocs, paramsOf, cond } };
 }
 
 function sameTopology(a: TopologyEdge[], b: TopologyEdge[] | undefined): boolean {
@@ -366,7 +377,7 @@ function patchInstance(
       },
     };
   const circuit = new MnaCircuit(baseInst.circuit.size, baseInst.kinds, devices, baseInst.circuit.system, opts);
-  return { ok: true, inst: { ...baseInst, devices, deviceById, circuit } };
+  return { ok: true, inst: { ...baseInst, devices, deviceById, circuit, paramsOf, cond } };
 }
 
 const results = new WeakMap<object, Float64Array>();
@@ -375,7 +386,7 @@ function failedCircuit(sheet: Sheet | undefined, netList: NetList | undefined, e
   const none = (): never => {
     throw new Error(`no solution: ${err.error.message}`);
   };
-  return { sheet, netList, error: err, unknowns: 0, linearSolverName: '', netNames: [], solve: () => err, solveRaw: () => err, netVoltage: none, pinVoltage: none, pinCurrent: none, partPower: none };
+  return { sheet, netList, error: err, unknowns: 0, linearSolverName: '', netNames: [], solve: () => err, solveRaw: () => err, netVoltage: none, pinVoltage: none, pinCurrent: none, partPower: none, sensitivities: none };
 }
 
 export function compileCircuit(input: Sheet | unknown, options: SolveOptions = {}): CompiledCircuit {
@@ -575,6 +586,59 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
       const k = partCatalog[part.type].pins.findIndex((p) => p.name === pin);
       if (k < 0) throw new Error(`no pin ${partId}.${pin}`);
       return partCurrents(l, partId)[k];
+    },
+    sensitivities(output, params) {
+      const l = needLast();
+      const inst = l.inst;
+      const pinsOf = (part: Part) => partCatalog[part.type].pins.map((p) => base.netUnknown[base.nets.pinToIndex.get(pinKey(part.id, p.name))!]);
+      const wanted =
+        params ??
+        base.solved.flatMap((part) => (inst.deviceById.has(part.id) ? partCatalog[part.type].params.filter((p) => p.tolerance && p.kind === 'number').map((p) => ({ part: part.id, param: p.name })) : []));
+      return adjointSensitivities(
+        {
+          circuit: inst.circuit,
+          x: l.x,
+          gmin: l.gmin,
+          linearSolver: opts.linearSolver,
+          netUnknown(net) {
+            const n = base.nets.byName.get(net);
+            return n === undefined ? undefined : base.netUnknown[n.index];
+          },
+          device(partId) {
+            const part = byId.get(partId);
+            const device = inst.deviceById.get(partId);
+            if (!part || !device) return undefined;
+            return { device, pins: pinsOf(part), pinNames: partCatalog[part.type].pins.map((p) => p.name) };
+          },
+          paramValue(partId, param) {
+            const part = byId.get(partId);
+            const v = part ? inst.paramsOf(part)[param] : undefined;
+            return typeof v === 'number' && inst.deviceById.has(partId) ? v : undefined;
+          },
+          perturbed(partId, param, value) {
+            const part = byId.get(partId)!;
+            const def = partCatalog[part.type];
+            const info = def.params.find((p) => p.name === param);
+            const next = { ...inst.paramsOf(part), [param]: value };
+            const env = envFor(part, next, inst.cond);
+            const problem = (info && paramProblem(info, value)) || def.crossCheck?.(next)[0]?.[1] || def.model.check?.(next, env)[0]?.[1];
+            if (problem) return `${param} = ${value} ${problem}`;
+            if (!sameTopology(def.model.topology(next, env), inst.topo.get(partId))) return `moving ${param} changes the circuit's structure here (a 0 Ω link appears or goes)`;
+            const rec = inst.allocs.get(partId) ?? [];
+            let k = 0;
+            let mismatch = false;
+            const replay = (kind: number) => {
+              const r = rec[k++];
+              if (!r || r.kind !== kind) mismatch = true;
+              return r ? r.index : 0;
+            };
+            const d = def.model.create({ partId, params: next, env, pins: pinsOf(part), alloc: { internalNode: () => replay(UNKNOWN_NODE), branch: () => replay(UNKNOWN_BRANCH) } });
+            return mismatch || k !== rec.length ? `moving ${param} changes how ${partId} is modelled (its unknowns change)` : d;
+          },
+        },
+        output,
+        wanted,
+      );
     },
     partPower(partId) {
       const l = needLast();

@@ -5,3 +5,4 @@ export * from './result';
 export * from './constants';
 export type { Device, DeviceModel, DeviceEnv, TopologyEdge, Stamper } from './device';
 export type { LinearSolverKind, LinearSystem, LinearSystemFactory } from './linear/types';
+export type { ParamRef, SensitivityEntry, SensitivityOutput, SensitivityReport } from './sensitivity';

@@ -118,8 +118,19 @@ export class MnaCircuit {
     }
   }
 
-  private stamper(run: NewtonRun, flag: { limited: boolean }, sys: Pick<LinearSystem, 'add' | 'addRhs'> = this.system): Stamper {
-    const rowScale = this.rowScale;
+  /**
+   * The stamps of `devices` at x, unscaled, as matrix entries and right-hand side: A·x − b is then
+   * their KCL and branch residual F(x), and A the Jacobian ∂F/∂x (the companion model is the
+   * linearisation at x). Devices must have begun from x ('warm'), so no junction is limited.
+   */
+  stampsAt(devices: readonly Device[], x: Float64Array, gmin: number, sink: Pick<LinearSystem, 'add' | 'addRhs'>): void {
+    const run: NewtonRun = { gmin, sourceScale: 1, shunt: 0, maxIterations: 1 };
+    const st = this.stamper(run, { limited: false }, sink, false);
+    for (const d of devices) d.load(st, x);
+  }
+
+  private stamper(run: NewtonRun, flag: { limited: boolean }, sys: Pick<LinearSystem, 'add' | 'addRhs'> = this.system, scaled = true): Stamper {
+    const rowScale = scaled ? this.rowScale : new Float64Array(this.size).fill(1);
     const rowMax = this.rowMax;
     // every entry goes in scaled by its row's scale (see rowScale); rhs entries too
     const add = (r: number, c: number, v: number) => {
