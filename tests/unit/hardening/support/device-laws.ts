@@ -72,9 +72,9 @@ function withSeries(j: Junction, rs: number, v: number): { i: number; g: number 
   }
   const vj = 0.5 * (lo + hi);
   const g = j(vj).g;
-  // the slope that weighs rounding is the series resistance's own when it is the steeper: the
-  // internal node's balance is only as good as 1/rs times the rounding of the voltages
-  return { i: (v - vj) / rs, g: Math.max(g / (1 + g * rs), 1 / rs) };
+  // the slope that weighs rounding is the steeper of the two elements, not their series
+  // combination: the internal node's balance is only as good as it times the voltages' rounding
+  return { i: (v - vj) / rs, g: Math.max(g, 1 / rs) };
 }
 
 const twoPin = (i: number, g: number): LawCurrents => ({ currents: [i, -i], slope: Math.abs(g), constraints: [] });
