@@ -125,7 +125,11 @@ function EditorScreen({ editor, loaded, initialSource }: { editor: Editor; loade
   return (
     <div className="flex h-full min-h-0 flex-col" data-testid="sheet-editor">
       <Toolbar title={loaded.title} notice={notice} status={autosave.status} />
-      <div className="grid min-h-0 flex-1 grid-cols-[12.5rem_minmax(0,1fr)_23rem] max-xl:grid-cols-[9.5rem_minmax(0,1fr)_19.5rem]">
+      <div
+        className={`grid min-h-0 flex-1 ${
+          ui.inspector ? 'grid-cols-[12.5rem_minmax(0,1fr)_23rem] max-xl:grid-cols-[9.5rem_minmax(0,1fr)_19.5rem]' : 'grid-cols-[12.5rem_minmax(0,1fr)] max-xl:grid-cols-[9.5rem_minmax(0,1fr)]'
+        }`}
+      >
         <div className="min-h-0 border-r border-rule bg-panel">
           <Palette />
         </div>
@@ -133,6 +137,18 @@ function EditorScreen({ editor, loaded, initialSource }: { editor: Editor; loade
           <div className="relative min-h-0 flex-1">
             <SchematicCanvas showReadings={ui.showReadings} />
             <CanvasBanner />
+            {!ui.inspector && (
+              <button
+                type="button"
+                onClick={() => ui.setPrefs({ inspector: true })}
+                // at the edge the inspector went to, clear of the co-editing avatars (top right)
+                className="absolute right-0 top-1/2 z-20 -translate-y-1/2 rounded-l border border-r-0 border-rule bg-panel px-2 py-1 text-[12px] text-ink-muted shadow-sm hover:text-ink"
+                data-testid="show-inspector"
+                title="Show the inspector: the selected part, the sheet, checks and readings"
+              >
+                « Inspector
+              </button>
+            )}
             <CollabOverlay editor={editor} collab={collab} />
             <div className="pointer-events-none absolute inset-x-0 top-2 z-20 flex flex-col items-center gap-1" aria-live="polite">
               {notices.map((n) => (
@@ -144,7 +160,7 @@ function EditorScreen({ editor, loaded, initialSource }: { editor: Editor; loade
           </div>
           <StatusBar />
         </div>
-        <RightPanel />
+        {ui.inspector && <RightPanel />}
       </div>
       {ui.helpOpen && <ShortcutHelp onClose={() => ui.setHelp(false)} />}
     </div>

@@ -7,14 +7,16 @@ const PREFS_KEY = 'tapline.editor.prefs';
 interface Prefs {
   showReadings: boolean;
   symbolStyle: 'iec' | 'ieee';
+  /** the inspector column is shown (hide it to give a narrow screen's width to the canvas) */
+  inspector: boolean;
 }
 
 function loadPrefs(): Prefs {
   try {
     const p = JSON.parse(localStorage.getItem(PREFS_KEY) ?? '{}') as Partial<Prefs>;
-    return { showReadings: p.showReadings !== false, symbolStyle: p.symbolStyle === 'ieee' ? 'ieee' : 'iec' };
+    return { showReadings: p.showReadings !== false, symbolStyle: p.symbolStyle === 'ieee' ? 'ieee' : 'iec', inspector: p.inspector !== false };
   } catch {
-    return { showReadings: true, symbolStyle: 'iec' };
+    return { showReadings: true, symbolStyle: 'iec', inspector: true };
   }
 }
 
@@ -30,13 +32,17 @@ export const useEditorUi = create<EditorUi>((set, get) => ({
   ...loadPrefs(),
   activeTab: 'part',
   helpOpen: false,
-  openTab: (id) => set({ activeTab: id }),
+  // opening a tab (a finding's "See why", a tool's button) brings the inspector back
+  openTab: (id) => {
+    set({ activeTab: id });
+    if (!get().inspector) get().setPrefs({ inspector: true });
+  },
   setHelp: (open) => set({ helpOpen: open }),
   setPrefs: (p) => {
     set(p);
-    const { showReadings, symbolStyle } = get();
+    const { showReadings, symbolStyle, inspector } = get();
     try {
-      localStorage.setItem(PREFS_KEY, JSON.stringify({ showReadings, symbolStyle }));
+      localStorage.setItem(PREFS_KEY, JSON.stringify({ showReadings, symbolStyle, inspector }));
     } catch {
       // preferences are a convenience; a full storage is not worth an error
     }

@@ -196,6 +196,29 @@ describe('schematic editor', () => {
     await expect.poll(() => page.getByTestId('shortcut-help').count()).toBe(0);
   });
 
+  it('stays legible at 1024 × 768: short palette names, whole net-label names, an inspector that can make room', async () => {
+    await page.setViewportSize({ width: 1024, height: 768 });
+    try {
+      await page.goto(`${server.baseUrl}/sheets/example-ntc-front-end`);
+      await page.locator('[data-testid^="net-tag-"]').first().waitFor();
+      const pot = page.getByTestId('palette-potentiometer');
+      // the short name shows and names the button (label in name); the tooltip gives the full name
+      expect(await pot.innerText()).toMatch(/^Pot/);
+      expect(await pot.innerText()).not.toMatch(/Potentiometer/);
+      expect(await page.getByRole('button', { name: 'Pot', exact: true }).count()).toBe(1);
+      expect(await pot.getAttribute('title')).toMatch(/^Potentiometer: /);
+      const label = page.locator('[data-testid^="part-"] svg text', { hasText: 'temp_sense' });
+      expect(await label.count()).toBe(1); // the whole name, not "temp_se…"
+      const before = (await page.getByTestId('schematic-canvas').boundingBox())!.width;
+      await page.getByTestId('hide-inspector').click();
+      await expect.poll(async () => (await page.getByTestId('schematic-canvas').boundingBox())!.width).toBeGreaterThan(before + 250);
+      await page.getByTestId('show-inspector').click();
+      await page.getByTestId('panel-tab-part').waitFor();
+    } finally {
+      await page.setViewportSize({ width: 1440, height: 900 });
+    }
+  });
+
   it('ran without script errors', () => {
     expect(problems.errors).toEqual([]);
   });

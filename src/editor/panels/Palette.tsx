@@ -26,8 +26,9 @@ const SHORT: Partial<Record<PartType, string>> = {
 };
 
 /**
- * Names for the narrow palette (below 1280 px): trade abbreviations where they exist. The button's
- * accessible name and tooltip keep the full name.
+ * Names for the narrow palette (below 1280 px): trade abbreviations where they exist. The visible
+ * name is the button's accessible name (label in name); the tooltip, its description, gives the
+ * full name.
  */
 const COMPACT: Record<PartType, string> = {
   resistor: 'Resistor',
@@ -89,8 +90,9 @@ export const Palette = memo(function Palette() {
                     <span className={`flex h-7 w-10 shrink-0 items-center justify-center max-xl:w-8 ${active ? '[&_.sym-body]:fill-transparent! [&_.tl-symbol]:text-accent-ink' : ''}`}>
                       <PartSymbol type={type} style={style} scale={type === 'ground' ? 0.55 : 0.42} />
                     </span>
+                    {/* one of the two shows (the other is display: none), and it names the button */}
                     <span className="min-w-0 flex-1 truncate max-xl:hidden">{paletteLabel(type)}</span>
-                    <span className="min-w-0 flex-1 truncate xl:hidden" aria-hidden="true">{COMPACT[type]}</span>
+                    <span className="min-w-0 flex-1 truncate xl:hidden">{COMPACT[type]}</span>
                     {key && (
                       <kbd aria-hidden="true" className={`num rounded border px-1 text-[10px] ${active ? 'border-accent-ink/40' : 'border-rule text-ink-muted'}`}>{key}</kbd>
                     )}
