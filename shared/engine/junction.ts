@@ -1,7 +1,7 @@
-// pn-junction helpers: limited exponentials, the SPICE junction-voltage limiting (Nagel, "SPICE2: A
-// computer program to simulate semiconductor circuits", UCB/ERL M520, 1975, DEVpnjlim as in SPICE3
-// and ngspice) and the standard temperature scaling of saturation currents (as in SPICE;
-// Massobrio & Antognetti, "Semiconductor Device Modeling with SPICE", 2nd ed., 1993).
+// pn-junction helpers: limited exponentials, the published junction-voltage limiting step (L. W.
+// Nagel, UCB/ERL memorandum M520, 1975) and the standard temperature scaling of saturation
+// currents, I_S(T) = I_S·(T/T0)^(XTI/n)·exp((T/T0 − 1)·E_g/(n·V_T)) (semiconductor device texts,
+// e.g. Sze & Ng, "Physics of Semiconductor Devices", 3rd ed.; from memory).
 import { NOMINAL_TEMPERATURE_K, thermalVoltage } from './constants';
 
 /**
@@ -74,7 +74,7 @@ export function pnjlim(vnew: number, vold: number, nvt: number, vcrit: number, v
     return vnew > nvt ? nvt * Math.log(vnew / nvt) : vnew;
   }
   if (vnew < 0) {
-    // limit large negative steps too (as ngspice does)
+    // limit large negative steps too (a common extension of the published step)
     const arg = vold > 0 ? -1 - vold : 2 * vold - 1;
     if (vnew < arg) return arg;
   }

@@ -1,5 +1,5 @@
 // Newton–Raphson on the MNA equations, with the safeguards of the circuit-simulation literature
-// (Nagel 1975, SPICE2; Vladimirescu, "The SPICE Book", 1994): junction limiting (in the device
+// (L. W. Nagel, UCB/ERL memorandum M520, 1975; from memory): junction limiting (in the device
 // models), gmin in parallel with junctions, gmin stepping with a shunt on every node, source
 // stepping, and convergence on both the step (voltages and branch currents) and the KCL residual.
 import { nodeV, type Device, type ResidualSink, type Stamper, type StartKind } from './device';

@@ -72,7 +72,7 @@ function createBjt(polarity: 1 | -1, ctx: DeviceContext<BjtParams>): Device {
       let vbe: number;
       let vbc: number;
       if (cold) {
-        // SPICE's initial junction guess: base-emitter at its critical voltage, base-collector off
+        // Usual initial junction guess (common practice): base-emitter at its critical voltage, base-collector off
         vbe = vcrit;
         vbc = 0;
         cold = false;

@@ -160,7 +160,7 @@ export const SATURATION_CURRENT_RANGE = { min: 1e-290, max: 1e6 } as const;
 
 /**
  * Why a junction's saturation current at temperature cannot be used, or null. Far below 0 °C the
- * SPICE temperature equation sends I_S to 0 (an insulator), far above it beyond any real part; the
+ * standard junction temperature equation sends I_S to 0 (an insulator), far above it beyond any real part; the
  * field named is the param to look at.
  */
 export function saturationCurrentProblem(field: string, is: number, temperatureC: number): Array<[string, string]> {

@@ -72,7 +72,7 @@ describe('engine against the independent Ebers–Moll solve', () => {
   });
 
   it('Sedra circuit at 27 °C matches references.md when I_S(27 °C) is 1e-14 A', () => {
-    // The engine scales I_S with temperature (SPICE: (T/T₀)^XTI·exp((T/T₀ − 1)·E_g/V_T), XTI = 3,
+    // The engine scales I_S with temperature (standard junction equation: (T/T₀)^XTI·exp((T/T₀ − 1)·E_g/V_T), XTI = 3,
     // E_g = 1.11 eV); choose the 25 °C value that scales to exactly 1e-14 A at 300.15 K.
     const T = 300.15;
     const f = Math.pow(T / T25, 3) * Math.exp((T / T25 - 1) * (1.11 / vt(T)));

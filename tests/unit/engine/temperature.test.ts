@@ -1,4 +1,4 @@
-// Temperature dependence: none at 25 °C; SPICE's saturation-current scaling for junctions;
+// Temperature dependence: none at 25 °C; the standard saturation-current scaling for junctions;
 // linear tempco for resistors, LED forward voltage and Zener voltage.
 import { describe, expect, it } from 'vitest';
 import { BOLTZMANN, ELEMENTARY_CHARGE, thermalVoltage } from '../../../shared/engine';

@@ -3,8 +3,7 @@
 // the currents the part must carry; a solution is right when these match the reported currents
 // (here) and the currents balance at every net (circuit-laws.ts).
 //
-// Sources: Shockley's junction law; the SPICE temperature equation for I_S (Massobrio & Antognetti,
-// "Semiconductor Device Modeling with SPICE", 2nd ed., 1993); Ebers & Moll, Proc. IRE 42(12), 1954;
+// Sources: Shockley's junction law; the standard junction temperature equation for I_S (semiconductor device texts, e.g. Sze & Ng, from memory); Ebers & Moll, Proc. IRE 42(12), 1954;
 // the β and Steinhart–Hart thermistor equations (Steinhart & Hart, Deep-Sea Research 15(4), 1968);
 // the LDR power law of shared/references.md.
 import { steinhartHartResistance } from '../../../support/reference/thermistor';
