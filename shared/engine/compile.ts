@@ -96,19 +96,23 @@ const DEFAULTS = {
   linearSolver: 'auto' as LinearSolverKind | LinearSystemFactory,
 };
 
+type AllocRecord = ReadonlyArray<{ kind: number; index: number }>;
+const NO_ALLOCS: AllocRecord = [];
+
+// Per-part facts are kept in arrays indexed by the part's position in sheet.parts (BaseInfo.index
+// maps an id to it): a sheet of 10⁴ parts otherwise pays for a handful of 10⁴-entry string maps on
+// every compile and one copied map per sweep point.
 interface Instance {
   devices: Device[];
-  /** device per part id (excluded parts and connectors have none) */
-  deviceById: Map<string, Device>;
-  /** position of each part's device in `devices` */
-  deviceIndex: Map<string, number>;
+  /** position in `devices` of each part's device, by part index (-1: excluded part or connector) */
+  devicePos: Int32Array;
   kinds: Uint8Array;
   circuit: MnaCircuit;
   signature: string;
-  /** topology edges per part, as checked */
-  topo: Map<string, TopologyEdge[]>;
-  /** unknowns each part's device allocated, in order */
-  allocs: Map<string, Array<{ kind: number; index: number }>>;
+  /** topology edges by part index, as checked (undefined for parts not solved) */
+  topo: Array<TopologyEdge[] | undefined>;
+  /** unknowns each part's device allocated, in order, by part index */
+  allocs: Array<AllocRecord | undefined>;
   /** the params and conditions the devices were made with (overrides merged) */
   paramsOf: (p: Part) => Record<string, unknown>;
   cond: { temperatureC: number; illuminanceLux: number };
@@ -117,11 +121,19 @@ interface Instance {
 interface BaseInfo {
   sheet: Sheet;
   nets: NetList;
+  /** part id → position in sheet.parts */
+  index: Map<string, number>;
+  /** net index of each pin, by part index, in the part's pin order */
+  pinNets: number[][];
+  /** "R1.a" keys of each part's pins, by part index */
+  pinKeys: string[][];
   /** unknown index per net (GROUND for ground and inactive nets) */
   netUnknown: Int32Array;
   active: boolean[];
   /** parts in the solve (not isolated), in sheet order */
   solved: Part[];
+  /** part index of each entry of `solved` */
+  solvedIndex: number[];
   excluded: Set<string>;
   staticWarnings: SolveWarning[];
   /** unknowns that are net voltages (they come first) */
@@ -159,39 +171,49 @@ function buildBase(sheet: Sheet): BaseInfo {
   const staticWarnings: SolveWarning[] = [];
   for (const n of nets.notices) staticWarnings.push({ code: n.code, severity: 'caution', net: n.net, message: n.message });
 
-  // parts with nothing connected to any pin are left out of the solve (with a warning)
+  const parts = sheet.parts;
+  const index = new Map<string, number>();
+  const pinNets: number[][] = new Array(parts.length);
+  const pinKeys: string[][] = new Array(parts.length);
+  for (let i = 0; i < parts.length; i++) {
+    index.set(parts[i].id, i);
+    pinNets[i] = nets.partPins[i].nets;
+    pinKeys[i] = nets.partPins[i].keys;
+  }
+  const isConnector = (p: Part) => p.type === 'ground' || p.type === 'net_label';
+
+  // parts with nothing connected to any pin are left out of the solve (with a warning): every net
+  // one of its pins is on holds only that part's own pins
   const excluded = new Set<string>();
-  for (const part of sheet.parts) {
-    if (part.type === 'ground' || part.type === 'net_label') continue;
-    const def = partCatalog[part.type];
-    const own = def.pins.map((p) => pinKey(part.id, p.name));
-    const isolated = own.every((k) => nets.nets[nets.pinToIndex.get(k)!].pins.every((q) => q.startsWith(part.id + '.') && own.includes(q)));
+  for (let i = 0; i < parts.length; i++) {
+    const part = parts[i];
+    if (isConnector(part)) continue;
+    const row = pinNets[i];
+    const isolated = row.every((n) => nets.nets[n].pins.length === row.reduce((c, m) => c + (m === n ? 1 : 0), 0));
     if (isolated) {
       excluded.add(part.id);
       staticWarnings.push({
         code: 'part_unconnected',
         severity: 'warning',
         partId: part.id,
-        message: `${part.id} (${def.label.toLowerCase()}) is not connected to anything and was left out of the solve. Wire it up or delete it.`,
+        message: `${part.id} (${partCatalog[part.type].label.toLowerCase()}) is not connected to anything and was left out of the solve. Wire it up or delete it.`,
       });
     }
   }
-  const byId = new Map(sheet.parts.map((p) => [p.id, p] as const));
-  const active = nets.nets.map((n) =>
-    n.isGround ||
-    n.pins.some((k) => {
-      const id = k.slice(0, k.indexOf('.'));
-      const part = byId.get(id);
-      return !excluded.has(id) && part !== undefined && part.type !== 'ground' && part.type !== 'net_label';
-    }),
-  );
+  // a net takes part in the solve when it is ground or a part in the solve (not a connector) has a pin on it
+  const active: boolean[] = nets.nets.map((n) => n.isGround);
+  for (let i = 0; i < parts.length; i++) {
+    const part = parts[i];
+    if (isConnector(part) || excluded.has(part.id)) continue;
+    for (const n of pinNets[i]) active[n] = true;
+  }
   // unconnected pins of parts that are in the solve
-  for (const part of sheet.parts) {
-    if (excluded.has(part.id) || part.type === 'ground' || part.type === 'net_label') continue;
+  for (let i = 0; i < parts.length; i++) {
+    const part = parts[i];
+    if (excluded.has(part.id) || isConnector(part)) continue;
     const def = partCatalog[part.type];
-    for (const pin of def.pins) {
-      const k = pinKey(part.id, pin.name);
-      const net = nets.nets[nets.pinToIndex.get(k)!];
+    def.pins.forEach((pin, k) => {
+      const net = nets.nets[pinNets[i][k]];
       if (net.pins.length === 1 && !net.isGround)
         staticWarnings.push({
           code: 'unconnected_pin',
@@ -200,17 +222,23 @@ function buildBase(sheet: Sheet): BaseInfo {
           net: net.name,
           message: `Pin "${pin.name}" (${pin.label}) of ${part.id} is not connected to anything.`,
         });
-    }
+    });
   }
   const netUnknown = new Int32Array(nets.nets.length).fill(GROUND);
   let k = 0;
   nets.nets.forEach((n, i) => {
     if (!n.isGround && active[i]) netUnknown[i] = k++;
   });
-  const solved = sheet.parts.filter((p) => !excluded.has(p.id));
+  const solved: Part[] = [];
+  const solvedIndex: number[] = [];
+  parts.forEach((p, i) => {
+    if (excluded.has(p.id)) return;
+    solved.push(p);
+    solvedIndex.push(i);
+  });
   // unknown params (kept in the file, ignored by the solver), on every part: a misspelt param on a
   // part not yet wired up is still worth knowing about
-  for (const part of sheet.parts) {
+  for (const part of parts) {
     const def = partCatalog[part.type];
     for (const key of Object.keys(part.params ?? {}))
       if (!def.params.some((p) => p.name === key))
@@ -221,7 +249,7 @@ function buildBase(sheet: Sheet): BaseInfo {
           message: `${part.id} (${part.type}) has a param "${key}" that Tapline does not know; it is ignored. Known params: ${def.params.map((p) => p.name).join(', ') || 'none'}.`,
         });
   }
-  return { sheet, nets, netUnknown, active, solved, excluded, staticWarnings, externalCount: k };
+  return { sheet, nets, index, pinNets, pinKeys, netUnknown, active, solved, solvedIndex, excluded, staticWarnings, externalCount: k };
 }
 
 function instantiate(
@@ -235,21 +263,22 @@ function instantiate(
   // physical checks and topology
   const issues: SheetIssue[] = [];
   const topo: PartTopology[] = [];
-  const topoById = new Map<string, TopologyEdge[]>();
-  const envs = new Map<string, DeviceEnv>();
-  for (const part of base.solved) {
+  const partCount = base.sheet.parts.length;
+  const topoOf = new Array<TopologyEdge[] | undefined>(partCount);
+  const envs = new Array<DeviceEnv | undefined>(partCount);
+  base.solved.forEach((part, s) => {
+    const i = base.solvedIndex[s];
     const def: PartDefinition = partCatalog[part.type];
     const params = paramsOf(part);
     const env = envFor(part, params, cond);
-    envs.set(part.id, env);
-    for (const [field, msg] of def.model.check?.(params, env) ?? [])
-      issues.push({ path: `parts.${part.id}.params.${field}`, partId: part.id, field, message: `Part "${part.id}" (${part.type}): field "${field}" ${msg}.` });
-    const pinNets = def.pins.map((p) => nets.pinToIndex.get(pinKey(part.id, p.name))!);
+    envs[i] = env;
+    const check = def.model.check?.(params, env);
+    if (check) for (const [field, msg] of check) issues.push({ path: `parts.${part.id}.params.${field}`, partId: part.id, field, message: `Part "${part.id}" (${part.type}): field "${field}" ${msg}.` });
     const edges: TopologyEdge[] = def.model.topology(params, env);
-    topoById.set(part.id, edges);
+    topoOf[i] = edges;
     const vt = valueText(part, params, edges);
-    topo.push({ partId: part.id, type: part.type, pinNets, edges, ...(vt ? { valueText: vt } : {}) });
-  }
+    topo.push(vt ? { partId: part.id, type: part.type, pinNets: base.pinNets[i], edges, valueText: vt } : { partId: part.id, type: part.type, pinNets: base.pinNets[i], edges });
+  });
   if (issues.length)
     return {
       ok: false,
@@ -274,36 +303,37 @@ function instantiate(
   const kinds: number[] = [];
   for (let i = 0; i < netUnknown.length; i++) if (netUnknown[i] !== GROUND) kinds.push(UNKNOWN_NODE);
   const names: string[] = [];
-  let log: Array<{ kind: number; index: number }> = [];
+  // most parts allocate nothing: the record is made on the first allocation only
+  let log: Array<{ kind: number; index: number }> | null = null;
+  const record = (kind: number) => {
+    kinds.push(kind);
+    (log ??= []).push({ kind, index: kinds.length - 1 });
+    return kinds.length - 1;
+  };
   const alloc = {
     internalNode(name: string) {
-      kinds.push(UNKNOWN_NODE);
       names.push('n:' + name);
-      log.push({ kind: UNKNOWN_NODE, index: kinds.length - 1 });
-      return kinds.length - 1;
+      return record(UNKNOWN_NODE);
     },
     branch(name: string) {
-      kinds.push(UNKNOWN_BRANCH);
       names.push('b:' + name);
-      log.push({ kind: UNKNOWN_BRANCH, index: kinds.length - 1 });
-      return kinds.length - 1;
+      return record(UNKNOWN_BRANCH);
     },
   };
   const devices: Device[] = [];
-  const deviceById = new Map<string, Device>();
-  const deviceIndex = new Map<string, number>();
-  const allocs = new Map<string, Array<{ kind: number; index: number }>>();
-  for (const part of base.solved) {
-    if (part.type === 'ground' || part.type === 'net_label') continue;
+  const devicePos = new Int32Array(partCount).fill(-1);
+  const allocs = new Array<AllocRecord | undefined>(partCount);
+  base.solved.forEach((part, s) => {
+    if (part.type === 'ground' || part.type === 'net_label') return;
+    const i = base.solvedIndex[s];
     const def = partCatalog[part.type];
-    const pins = def.pins.map((p) => netUnknown[nets.pinToIndex.get(pinKey(part.id, p.name))!]);
-    log = [];
-    const dev = def.model.create({ partId: part.id, params: paramsOf(part), env: envs.get(part.id)!, pins, alloc });
-    allocs.set(part.id, log);
-    deviceIndex.set(part.id, devices.length);
+    const pins = base.pinNets[i].map((n) => netUnknown[n]);
+    log = null;
+    const dev = def.model.create({ partId: part.id, params: paramsOf(part), env: envs[i]!, pins, alloc });
+    allocs[i] = log ?? NO_ALLOCS;
+    devicePos[i] = devices.length;
     devices.push(dev);
-    deviceById.set(part.id, dev);
-  }
+  });
   const kindArr = Uint8Array.from(kinds);
   const size = kindArr.length;
   // the structure signature decides whether a linear system can be reused
@@ -314,7 +344,7 @@ function instantiate(
   const signature = `${size}:${names.join(',')}:${pattern.length}:${h}`;
   const system = reuse && reuse.signature === signature ? reuse.system : createLinearSystem(opts.linearSolver, size, pattern);
   const circuit = new MnaCircuit(size, kindArr, devices, system, opts);
-  return { ok: true, inst: { devices, deviceById, deviceIndex, kinds: kindArr, circuit, signature, topo: topoById, allocs, paramsOf, cond } };
+  return { ok: true, inst: { devices, devicePos, kinds: kindArr, circuit, signature, topo: topoOf, allocs, paramsOf, cond } };
 }
 
 function sameTopology(a: TopologyEdge[], b: TopologyEdge[] | undefined): boolean {
@@ -338,17 +368,17 @@ function patchInstance(
 ): { ok: true; inst: Instance } | { ok: false; error: SolveErrorInfo } | null {
   const issues: SheetIssue[] = [];
   const devices = baseInst.devices.slice();
-  const deviceById = new Map(baseInst.deviceById);
   for (const part of changed) {
     if (base.excluded.has(part.id) || part.type === 'ground' || part.type === 'net_label') continue;
+    const i = base.index.get(part.id)!;
     const def = partCatalog[part.type];
     const params = paramsOf(part);
     const env = envFor(part, params, cond);
     for (const [field, msg] of def.model.check?.(params, env) ?? [])
       issues.push({ path: `parts.${part.id}.params.${field}`, partId: part.id, field, message: `Part "${part.id}" (${part.type}): field "${field}" ${msg}.` });
     if (issues.length) continue;
-    if (!sameTopology(def.model.topology(params, env), baseInst.topo.get(part.id))) return null;
-    const rec = baseInst.allocs.get(part.id) ?? [];
+    if (!sameTopology(def.model.topology(params, env), baseInst.topo[i])) return null;
+    const rec = baseInst.allocs[i] ?? NO_ALLOCS;
     let k = 0;
     let mismatch = false;
     const replay = (kind: number) => {
@@ -359,11 +389,10 @@ function patchInstance(
       }
       return r.index;
     };
-    const pins = def.pins.map((p) => base.netUnknown[base.nets.pinToIndex.get(pinKey(part.id, p.name))!]);
+    const pins = base.pinNets[i].map((n) => base.netUnknown[n]);
     const dev = def.model.create({ partId: part.id, params, env, pins, alloc: { internalNode: () => replay(UNKNOWN_NODE), branch: () => replay(UNKNOWN_BRANCH) } });
     if (mismatch || k !== rec.length) return null;
-    devices[baseInst.deviceIndex.get(part.id)!] = dev;
-    deviceById.set(part.id, dev);
+    devices[baseInst.devicePos[i]] = dev;
   }
   if (issues.length)
     return {
@@ -377,7 +406,7 @@ function patchInstance(
       },
     };
   const circuit = new MnaCircuit(baseInst.circuit.size, baseInst.kinds, devices, baseInst.circuit.system, opts);
-  return { ok: true, inst: { ...baseInst, devices, deviceById, circuit, paramsOf, cond } };
+  return { ok: true, inst: { ...baseInst, devices, circuit, paramsOf, cond } };
 }
 
 const results = new WeakMap<object, Float64Array>();
@@ -429,7 +458,16 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
 
   const internalError = (e: unknown) =>
     failure({ code: 'internal_error', message: `The solver hit an internal error: ${e instanceof Error ? e.message : String(e)}. Please report this sheet.`, parts: [], nets: [] }, base.staticWarnings);
-  const byId = new Map(sheet.parts.map((p) => [p.id, p] as const));
+  const partOf = (id: string): Part | undefined => {
+    const i = base.index.get(id);
+    return i === undefined ? undefined : sheet.parts[i];
+  };
+  const byId = { get: partOf };
+  const deviceOf = (inst: Instance, id: string): Device | undefined => {
+    const i = base.index.get(id);
+    const pos = i === undefined ? -1 : inst.devicePos[i];
+    return pos < 0 ? undefined : inst.devices[pos];
+  };
   let last: { inst: Instance; x: Float64Array; gmin: number; iterations: number; strategy: SolveStrategy; cond: { temperatureC: number; illuminanceLux: number } } | null = null;
 
   /** Validate options, build (or patch) the instance for this solve. */
@@ -556,7 +594,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
   const partCurrents = (l: NonNullable<typeof last>, partId: string): number[] => {
     const part = byId.get(partId);
     if (!part) throw new Error(`no part ${partId}`);
-    const dev = l.inst.deviceById.get(partId);
+    const dev = deviceOf(l.inst, partId);
     return dev ? dev.pinCurrents(l.x, l.gmin) : partCatalog[part.type].pins.map(() => 0);
   };
 
@@ -590,10 +628,10 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     sensitivities(output, params) {
       const l = needLast();
       const inst = l.inst;
-      const pinsOf = (part: Part) => partCatalog[part.type].pins.map((p) => base.netUnknown[base.nets.pinToIndex.get(pinKey(part.id, p.name))!]);
+      const pinsOf = (part: Part) => base.pinNets[base.index.get(part.id)!].map((n) => base.netUnknown[n]);
       const wanted =
         params ??
-        base.solved.flatMap((part) => (inst.deviceById.has(part.id) ? partCatalog[part.type].params.filter((p) => p.tolerance && p.kind === 'number').map((p) => ({ part: part.id, param: p.name })) : []));
+        base.solved.flatMap((part) => (deviceOf(inst, part.id) ? partCatalog[part.type].params.filter((p) => p.tolerance && p.kind === 'number').map((p) => ({ part: part.id, param: p.name })) : []));
       return adjointSensitivities(
         {
           circuit: inst.circuit,
@@ -606,14 +644,14 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
           },
           device(partId) {
             const part = byId.get(partId);
-            const device = inst.deviceById.get(partId);
+            const device = deviceOf(inst, partId);
             if (!part || !device) return undefined;
             return { device, pins: pinsOf(part), pinNames: partCatalog[part.type].pins.map((p) => p.name) };
           },
           paramValue(partId, param) {
             const part = byId.get(partId);
             const v = part ? inst.paramsOf(part)[param] : undefined;
-            return typeof v === 'number' && inst.deviceById.has(partId) ? v : undefined;
+            return typeof v === 'number' && deviceOf(inst, partId) ? v : undefined;
           },
           perturbed(partId, param, value) {
             const part = byId.get(partId)!;
@@ -623,8 +661,8 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
             const env = envFor(part, next, inst.cond);
             const problem = (info && paramProblem(info, value)) || def.crossCheck?.(next)[0]?.[1] || def.model.check?.(next, env)[0]?.[1];
             if (problem) return `${param} = ${value} ${problem}`;
-            if (!sameTopology(def.model.topology(next, env), inst.topo.get(partId))) return `moving ${param} changes the circuit's structure here (a 0 Ω link appears or goes)`;
-            const rec = inst.allocs.get(partId) ?? [];
+            if (!sameTopology(def.model.topology(next, env), inst.topo[base.index.get(partId)!])) return `moving ${param} changes the circuit's structure here (a 0 Ω link appears or goes)`;
+            const rec = inst.allocs[base.index.get(partId)!] ?? NO_ALLOCS;
             let k = 0;
             let mismatch = false;
             const replay = (kind: number) => {
@@ -881,36 +919,52 @@ function assemble(
       list.push(w);
       staticByPart.set(w.partId, list);
     }
-  for (const part of base.sheet.parts) {
+  const all = base.sheet.parts;
+  for (let i = 0; i < all.length; i++) {
+    const part = all[i];
     const def = partCatalog[part.type];
-    const partWarnings: SolveWarning[] = [...(staticByPart.get(part.id) ?? [])];
+    const own = staticByPart.get(part.id);
+    const partWarnings: SolveWarning[] = own ? own.slice() : [];
+    const pinNames = def.pins;
+    const pinCurrents: Record<string, number> = {};
     if (base.excluded.has(part.id)) {
-      setOwn(parts, part.id, { pinCurrents: Object.fromEntries(def.pins.map((p) => [p.name, 0])), power: 0, warnings: partWarnings });
+      for (const p of pinNames) pinCurrents[p.name] = 0;
+      setOwn(parts, part.id, { pinCurrents, power: 0, warnings: partWarnings });
       continue;
     }
-    const pv = def.pins.map((p) => {
-      const netIdx = base.nets.pinToIndex.get(pinKey(part.id, p.name))!;
-      const u = base.netUnknown[netIdx];
-      return u < 0 ? 0 : x[u];
-    });
-    def.pins.forEach((p, k) => (pins[pinKey(part.id, p.name)] = pv[k] === 0 ? 0 : pv[k]));
-    const dev = inst.deviceById.get(part.id);
-    const pi = dev ? dev.pinCurrents(x, gminUsed) : def.pins.map(() => 0);
-    let power = 0;
-    for (let k = 0; k < pi.length; k++) power += pv[k] * pi[k];
-    const rep = dev?.report?.(x, pv, pi);
-    for (const w of rep?.warnings ?? []) {
-      const sw: SolveWarning = { code: w.code, severity: w.severity, partId: part.id, message: w.message };
-      partWarnings.push(sw);
-      warnings.push(sw);
+    const netsOfPins = base.pinNets[i];
+    const keys = base.pinKeys[i];
+    const pv = new Array<number>(netsOfPins.length);
+    for (let k = 0; k < netsOfPins.length; k++) {
+      const u = base.netUnknown[netsOfPins[k]];
+      const v = u < 0 ? 0 : x[u];
+      pv[k] = v;
+      pins[keys[k]] = v === 0 ? 0 : v; // −0 reads as 0
     }
-    const pinCurrents = Object.fromEntries(def.pins.map((p, k) => [p.name, pi[k] === 0 ? 0 : pi[k]]));
-    if (!pi.every(Number.isFinite) || !Number.isFinite(power)) bad.push(part.id);
+    const pos = inst.devicePos[i];
+    const dev = pos < 0 ? undefined : inst.devices[pos];
+    const pi = dev ? dev.pinCurrents(x, gminUsed) : pinNames.map(() => 0);
+    let power = 0;
+    let finite = true;
+    for (let k = 0; k < pi.length; k++) {
+      power += pv[k] * pi[k];
+      pinCurrents[pinNames[k].name] = pi[k] === 0 ? 0 : pi[k];
+      if (!Number.isFinite(pi[k])) finite = false;
+    }
+    const rep = dev?.report?.(x, pv, pi);
+    if (rep?.warnings)
+      for (const w of rep.warnings) {
+        const sw: SolveWarning = { code: w.code, severity: w.severity, partId: part.id, message: w.message };
+        partWarnings.push(sw);
+        warnings.push(sw);
+      }
+    if (!finite || !Number.isFinite(power)) bad.push(part.id);
     const derived = rep?.derived;
-    if (derived) for (const v of Object.values(derived)) if (typeof v === 'number' && !Number.isFinite(v)) bad.push(part.id);
-    setOwn(parts, part.id, { pinCurrents, power: power === 0 ? 0 : power, warnings: partWarnings, ...(derived ? { derived } : {}) });
+    if (derived) for (const key in derived) if (typeof derived[key] === 'number' && !Number.isFinite(derived[key])) bad.push(part.id);
+    setOwn(parts, part.id, derived ? { pinCurrents, power: power === 0 ? 0 : power, warnings: partWarnings, derived } : { pinCurrents, power: power === 0 ? 0 : power, warnings: partWarnings });
   }
-  const badNets = Object.entries(nets).filter(([, v]) => !Number.isFinite(v)).map(([k]) => k);
+  const badNets: string[] = [];
+  for (const name in nets) if (!Number.isFinite(nets[name])) badNets.push(name);
   if (bad.length || badNets.length)
     return failure(
       {

@@ -10,42 +10,61 @@ export interface Element {
   current(x: Float64Array): number;
 }
 
-export function resistanceElement(a: number, b: number, r: number, alloc: Allocator, name: string): Element {
-  if (a === b && isLink(r)) {
-    // both ends on one net: nothing flows, nothing to solve
-    return { load() {}, residual() {}, current: () => 0 };
+// The linear elements are classes rather than closures: a sheet of 10⁴ resistors would otherwise
+// make some 10⁵ function objects on every compile, and the garbage collector's time with them.
+
+/** both ends on one net: nothing flows, nothing to solve */
+const NO_ELEMENT: Element = { load() {}, residual() {}, current: () => 0 };
+
+/** an ideal 0 Ω link, solved by its branch current k */
+class LinkElement implements Element {
+  constructor(
+    private readonly a: number,
+    private readonly b: number,
+    private readonly k: number,
+  ) {}
+  load(s: Stamper): void {
+    s.add(this.a, this.k, 1);
+    s.add(this.b, this.k, -1);
+    s.add(this.k, this.a, 1);
+    s.add(this.k, this.b, -1);
   }
-  if (isLink(r)) {
-    const k = alloc.branch(name);
-    return {
-      load(s) {
-        s.add(a, k, 1);
-        s.add(b, k, -1);
-        s.add(k, a, 1);
-        s.add(k, b, -1);
-      },
-      residual(x, sink) {
-        sink.add(a, x[k]);
-        sink.add(b, -x[k]);
-      },
-      current: (x) => x[k],
-    };
+  residual(x: Float64Array, sink: ResidualSink): void {
+    sink.add(this.a, x[this.k]);
+    sink.add(this.b, -x[this.k]);
   }
-  const g = 1 / r;
-  return {
-    load(s) {
-      s.conductance(a, b, g);
-    },
-    residual(x, sink) {
-      const va = nodeV(x, a);
-      const vb = nodeV(x, b);
-      const i = g * (va - vb);
-      const scale = g * (Math.abs(va) + Math.abs(vb));
-      sink.add(a, i, scale);
-      sink.add(b, -i, scale);
-    },
-    current: (x) => g * (nodeV(x, a) - nodeV(x, b)),
-  };
+  current(x: Float64Array): number {
+    return x[this.k];
+  }
+}
+
+class ConductanceElement implements Element {
+  constructor(
+    private readonly a: number,
+    private readonly b: number,
+    private readonly g: number,
+  ) {}
+  load(s: Stamper): void {
+    s.conductance(this.a, this.b, this.g);
+  }
+  residual(x: Float64Array, sink: ResidualSink): void {
+    const va = nodeV(x, this.a);
+    const vb = nodeV(x, this.b);
+    const i = this.g * (va - vb);
+    const scale = this.g * (Math.abs(va) + Math.abs(vb));
+    sink.add(this.a, i, scale);
+    sink.add(this.b, -i, scale);
+  }
+  current(x: Float64Array): number {
+    return this.g * (nodeV(x, this.a) - nodeV(x, this.b));
+  }
+}
+
+/** `name` (for the branch unknown of a 0 Ω link) is only evaluated when one is needed. */
+export function resistanceElement(a: number, b: number, r: number, alloc: Allocator, name: string | (() => string)): Element {
+  if (a === b && isLink(r)) return NO_ELEMENT;
+  if (isLink(r)) return new LinkElement(a, b, alloc.branch(typeof name === 'string' ? name : name()));
+  return new ConductanceElement(a, b, 1 / r);
 }
 
 /** Topology edge for a resistance between pins 0 and 1. */
@@ -53,27 +72,38 @@ export function resistanceEdge(r: number, a = 0, b = 1): TopologyEdge {
   return isLink(r) ? { kind: 'voltage', a, b, value: 0, source: false } : { kind: 'resistive', a, b };
 }
 
+class ResistiveDevice implements Device {
+  readonly nonlinear = false;
+  readonly nodes: readonly number[];
+  declare readonly report?: Device['report'];
+  private readonly el: Element;
+  constructor(
+    readonly partId: string,
+    pins: readonly number[],
+    r: number,
+    alloc: Allocator,
+    report: Device['report'] | undefined,
+  ) {
+    this.el = resistanceElement(pins[0], pins[1], r, alloc, () => `${partId}:R`);
+    const [a, b] = pins;
+    this.nodes = a === GROUND ? (b === GROUND ? [] : [b]) : b === GROUND ? [a] : [a, b];
+    if (report) (this as { report?: Device['report'] }).report = report;
+  }
+  load(s: Stamper, x: Float64Array): void {
+    this.el.load(s, x);
+  }
+  residual(x: Float64Array, sink: ResidualSink): void {
+    this.el.residual(x, sink);
+  }
+  pinCurrents(x: Float64Array): number[] {
+    const i = this.el.current(x);
+    return [i, -i];
+  }
+}
+
 /** A linear two-pin part made of one resistance (resistor, NTC, LDR, switch, resistive load). */
-export function resistiveDevice(
-  partId: string,
-  pins: readonly number[],
-  r: number,
-  alloc: Allocator,
-  report?: Device['report'],
-): Device {
-  const el = resistanceElement(pins[0], pins[1], r, alloc, `${partId}:R`);
-  return {
-    partId,
-    nonlinear: false,
-    nodes: pins.filter((p) => p !== GROUND),
-    load: (s, x) => el.load(s, x),
-    residual: (x, sink) => el.residual(x, sink),
-    pinCurrents: (x) => {
-      const i = el.current(x);
-      return [i, -i];
-    },
-    ...(report ? { report } : {}),
-  };
+export function resistiveDevice(partId: string, pins: readonly number[], r: number, alloc: Allocator, report?: Device['report']): Device {
+  return new ResistiveDevice(partId, pins, r, alloc, report);
 }
 
 /**

@@ -28,6 +28,11 @@ export interface NetList {
   pinToNet: Record<string, string>;
   /** "R1.a" → index in nets */
   pinToIndex: Map<string, number>;
+  /**
+   * By position in sheet.parts: each pin's "R1.a" key and net index, in the part type's pin order
+   * (empty for a part of unknown type). Saves callers a string build and lookup per pin.
+   */
+  partPins: Array<{ keys: string[]; nets: number[] }>;
   /** the ground net's index, or -1 when the sheet has no ground */
   groundIndex: number;
   byName: Map<string, Net>;
@@ -66,16 +71,25 @@ class UnionFind {
  */
 export function extractNets(sheet: Pick<Sheet, 'parts' | 'wires'>): NetList {
   const uf = new UnionFind();
+  // pin key → union-find slot; once the nets are known its values become net indices (pinToIndex)
   const pinIndex = new Map<string, number>();
   const pinOrder: string[] = [];
+  const partSlots: Array<{ keys: string[]; slots: number[] }> = [];
   for (const part of sheet.parts) {
     const spec = partSpecs[part.type];
+    const own = { keys: [] as string[], slots: [] as number[] };
+    partSlots.push(own);
     if (!spec) continue;
     for (const pin of spec.pins) {
       const key = pinKey(part.id, pin.name);
-      if (pinIndex.has(key)) continue;
-      pinIndex.set(key, uf.add());
-      pinOrder.push(key);
+      let slot = pinIndex.get(key);
+      if (slot === undefined) {
+        slot = uf.add();
+        pinIndex.set(key, slot);
+        pinOrder.push(key);
+      }
+      own.keys.push(key);
+      own.slots.push(slot);
     }
   }
   for (const w of sheet.wires) {
@@ -123,8 +137,10 @@ export function extractNets(sheet: Pick<Sheet, 'parts' | 'wires'>): NetList {
   // nets in order of first appearance (part order, then pin order)
   const rootToNet = new Map<number, Net>();
   const nets: Net[] = [];
+  const netOfSlot = new Int32Array(pinOrder.length);
   for (const key of pinOrder) {
-    const r = uf.find(pinIndex.get(key)!);
+    const slot = pinIndex.get(key)!;
+    const r = uf.find(slot);
     let net = rootToNet.get(r);
     if (!net) {
       net = { name: '', index: nets.length, pins: [], isGround: r === groundRoot, labels: labelsByRoot.get(r) ?? [] };
@@ -132,6 +148,7 @@ export function extractNets(sheet: Pick<Sheet, 'parts' | 'wires'>): NetList {
       nets.push(net);
     }
     net.pins.push(key);
+    netOfSlot[slot] = net.index;
   }
 
   const notices: NetNotice[] = [];
@@ -166,8 +183,9 @@ export function extractNets(sheet: Pick<Sheet, 'parts' | 'wires'>): NetList {
     net.name = name;
   }
 
-  const pinToIndex = new Map<string, number>();
-  for (const net of nets) for (const p of net.pins) pinToIndex.set(p, net.index);
+  const pinToIndex = pinIndex;
+  for (const key of pinOrder) pinToIndex.set(key, netOfSlot[pinIndex.get(key)!]);
+  const partPins = partSlots.map(({ keys, slots }) => ({ keys, nets: slots.map((s) => netOfSlot[s]) }));
   const byName = new Map(nets.map((n) => [n.name, n] as const));
   // built on first use: a plain object with tens of thousands of keys is slow to build
   let pinToNet: Record<string, string> | null = null;
@@ -181,6 +199,7 @@ export function extractNets(sheet: Pick<Sheet, 'parts' | 'wires'>): NetList {
       return pinToNet;
     },
     pinToIndex,
+    partPins,
     groundIndex: groundRoot === -1 ? -1 : rootToNet.get(groundRoot)!.index,
     byName,
     notices,
