@@ -42,6 +42,67 @@ export interface NewtonRun {
   loadsOnAtStart?: boolean;
 }
 
+/**
+ * Writes device stamps into a linear system, every entry (and rhs entry) scaled by its row's
+ * scale (see MnaCircuit.rowScale), recording each row's largest unscaled entry. A class rather
+ * than an object of closures: several are made per solve, and a Monte Carlo run makes 10⁵ solves.
+ */
+class ScaledStamper implements Stamper {
+  constructor(
+    private readonly sys: Pick<LinearSystem, 'add' | 'addRhs'>,
+    private readonly rowScale: Float64Array,
+    private readonly rowMax: Float64Array,
+    readonly gmin: number,
+    readonly sourceScale: number,
+    private readonly flag: { limited: boolean },
+  ) {}
+  private put(r: number, c: number, v: number): void {
+    this.sys.add(r, c, v * this.rowScale[r]);
+    const a = Math.abs(v);
+    if (a > this.rowMax[r]) this.rowMax[r] = a;
+  }
+  private putRhs(r: number, v: number): void {
+    this.sys.addRhs(r, v * this.rowScale[r]);
+  }
+  markLimited(): void {
+    this.flag.limited = true;
+  }
+  conductance(a: number, b: number, g: number): void {
+    if (a >= 0) this.put(a, a, g);
+    if (b >= 0) this.put(b, b, g);
+    if (a >= 0 && b >= 0) {
+      this.put(a, b, -g);
+      this.put(b, a, -g);
+    }
+  }
+  add(r: number, c: number, v: number): void {
+    if (r >= 0 && c >= 0) this.put(r, c, v);
+  }
+  addRhs(r: number, v: number): void {
+    if (r >= 0) this.putRhs(r, v);
+  }
+  current(a: number, b: number, i: number): void {
+    if (a >= 0) this.putRhs(a, -i);
+    if (b >= 0) this.putRhs(b, i);
+  }
+  nonlinear(nodes: readonly number[], currents: readonly number[], controls: ReadonlyArray<readonly [number, number, number]>, jac: ReadonlyArray<readonly number[]>): void {
+    for (let k = 0; k < nodes.length; k++) {
+      const n = nodes[k];
+      if (n < 0) continue;
+      let eq = currents[k];
+      const row = jac[k];
+      for (let m = 0; m < controls.length; m++) {
+        const [p, q, v] = controls[m];
+        const g = row[m];
+        if (p >= 0) this.put(n, p, g);
+        if (q >= 0) this.put(n, q, -g);
+        eq -= g * v;
+      }
+      this.putRhs(n, -eq);
+    }
+  }
+}
+
 /** The assembled circuit the Newton loop works on. */
 export class MnaCircuit {
   readonly nonlinear: boolean;
@@ -130,56 +191,7 @@ export class MnaCircuit {
   }
 
   private stamper(run: NewtonRun, flag: { limited: boolean }, sys: Pick<LinearSystem, 'add' | 'addRhs'> = this.system, scaled = true): Stamper {
-    const rowScale = scaled ? this.rowScale : new Float64Array(this.size).fill(1);
-    const rowMax = this.rowMax;
-    // every entry goes in scaled by its row's scale (see rowScale); rhs entries too
-    const add = (r: number, c: number, v: number) => {
-      sys.add(r, c, v * rowScale[r]);
-      const a = Math.abs(v);
-      if (a > rowMax[r]) rowMax[r] = a;
-    };
-    const addRhs = (r: number, v: number) => sys.addRhs(r, v * rowScale[r]);
-    return {
-      gmin: run.gmin,
-      sourceScale: run.sourceScale,
-      markLimited() {
-        flag.limited = true;
-      },
-      conductance(a, b, g) {
-        if (a >= 0) add(a, a, g);
-        if (b >= 0) add(b, b, g);
-        if (a >= 0 && b >= 0) {
-          add(a, b, -g);
-          add(b, a, -g);
-        }
-      },
-      add(r, c, v) {
-        if (r >= 0 && c >= 0) add(r, c, v);
-      },
-      addRhs(r, v) {
-        if (r >= 0) addRhs(r, v);
-      },
-      current(a, b, i) {
-        if (a >= 0) addRhs(a, -i);
-        if (b >= 0) addRhs(b, i);
-      },
-      nonlinear(nodes, currents, controls, jac) {
-        for (let k = 0; k < nodes.length; k++) {
-          const n = nodes[k];
-          if (n < 0) continue;
-          let eq = currents[k];
-          const row = jac[k];
-          for (let m = 0; m < controls.length; m++) {
-            const [p, q, v] = controls[m];
-            const g = row[m];
-            if (p >= 0) add(n, p, g);
-            if (q >= 0) add(n, q, -g);
-            eq -= g * v;
-          }
-          addRhs(n, -eq);
-        }
-      },
-    };
+    return new ScaledStamper(sys, scaled ? this.rowScale : new Float64Array(this.size).fill(1), this.rowMax, run.gmin, run.sourceScale, flag);
   }
 
   /** Largest KCL residual relative to its tolerance (≤ 1 means converged) at x. */
