@@ -7,7 +7,7 @@ import type { LoadedSheet, SaveMeta, SaveResult, SheetSource } from '../editor/s
 import { ApiError } from '../lib/api';
 import { queryKeys } from '../lib/queryKeys';
 import { endpoints } from './endpoints';
-import { liveSaveFor } from '../collab/liveSessions';
+import { LIVE_AUTOSAVE_DELAY_MS, liveSaveFor } from '../collab/liveSessions';
 import { storeProject } from './projectQueries';
 import type { ProjectDetail } from './types';
 
@@ -28,6 +28,9 @@ export function saveErrorMessage(e: unknown): string {
     default: return `Not saved: ${e.message}`;
   }
 }
+
+/** Pause after the last edit before a sheet not edited live is PATCHed, ms. */
+const REST_AUTOSAVE_DELAY_MS = 1200;
 
 /** A cloud project as a sheet source: viewers get it read-only; editors and owners save to it. */
 export function createCloudSheetSource(projectId: string, qc: QueryClient): SheetSource {
@@ -54,7 +57,10 @@ export function createCloudSheetSource(projectId: string, qc: QueryClient): Shee
   };
   return {
     key: `cloud-${projectId}`,
-    autosaveDelayMs: 1200,
+    // read at every edit: a sheet joined live saves as soon as the server has acknowledged it
+    get autosaveDelayMs() {
+      return liveSaveFor(projectId) ? LIVE_AUTOSAVE_DELAY_MS : REST_AUTOSAVE_DELAY_MS;
+    },
     get save() {
       return readOnly ? undefined : save;
     },

@@ -8,6 +8,13 @@ const sessions = new Map<string, SyncClient>();
 /** Longest a save waits for the server to acknowledge everything, ms. */
 const SAVE_WAIT_MS = 15_000;
 
+/**
+ * Autosave pause of a live project, ms. Its edits are already on their way to the server as
+ * operations, so "saving" only waits for their acknowledgements: a REST-length pause (1.2 s) would
+ * show "Unsaved changes" for a change the server has long stored.
+ */
+export const LIVE_AUTOSAVE_DELAY_MS = 100;
+
 export function registerLiveSession(projectId: string, client: SyncClient): () => void {
   sessions.set(projectId, client);
   return () => {
