@@ -166,6 +166,17 @@ function valueText(part: Part, params: Record<string, unknown>, edges: TopologyE
   }
 }
 
+/** One error for a list of param problems: the first one's message, and how many more there are. */
+function invalidParameters(issues: SheetIssue[]): SolveErrorInfo {
+  return {
+    code: 'invalid_parameter',
+    message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message,
+    parts: [...new Set(issues.map((i) => i.partId).filter((id): id is string => !!id))],
+    nets: [],
+    issues,
+  };
+}
+
 function buildBase(sheet: Sheet): BaseInfo {
   const nets = extractNets(sheet);
   const staticWarnings: SolveWarning[] = [];
@@ -279,17 +290,7 @@ function instantiate(
     const vt = valueText(part, params, edges);
     topo.push(vt ? { partId: part.id, type: part.type, pinNets: base.pinNets[i], edges, valueText: vt } : { partId: part.id, type: part.type, pinNets: base.pinNets[i], edges });
   });
-  if (issues.length)
-    return {
-      ok: false,
-      error: {
-        code: 'invalid_parameter',
-        message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message,
-        parts: [...new Set(issues.map((i) => i.partId!))],
-        nets: [],
-        issues,
-      },
-    };
+  if (issues.length) return { ok: false, error: invalidParameters(issues) };
   const topoError = checkTopology({
     netNames: nets.nets.map((n) => n.name),
     netPins: nets.nets.map((n) => n.pins),
@@ -394,17 +395,7 @@ function patchInstance(
     if (mismatch || k !== rec.length) return null;
     devices[baseInst.devicePos[i]] = dev;
   }
-  if (issues.length)
-    return {
-      ok: false,
-      error: {
-        code: 'invalid_parameter',
-        message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message,
-        parts: [...new Set(issues.map((i) => i.partId!))],
-        nets: [],
-        issues,
-      },
-    };
+  if (issues.length) return { ok: false, error: invalidParameters(issues) };
   const circuit = new MnaCircuit(baseInst.circuit.size, baseInst.kinds, devices, baseInst.circuit.system, opts);
   return { ok: true, inst: { ...baseInst, devices, circuit, paramsOf, cond } };
 }
@@ -510,10 +501,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
         merged.set(id, params);
       }
       if (issues.length)
-        return failure(
-          { code: 'invalid_parameter', message: issues.length > 1 ? `${issues[0].message.replace(/\.$/, '')} (and ${issues.length - 1} more)` : issues[0].message, parts: [...new Set(issues.map((i) => i.partId!).filter(Boolean))], nets: [], issues },
-          base.staticWarnings,
-        );
+        return failure(invalidParameters(issues), base.staticWarnings);
     }
     const paramsOf = (p: Part) => merged.get(p.id) ?? (p.params as Record<string, unknown>);
     if (baseInst.ok) {
