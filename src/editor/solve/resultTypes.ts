@@ -1,38 +1,25 @@
 // The operating-point result as the sheet-format contract fixes it (shared/contracts/sheet-format.md,
-// "Results"): the editor's view of it. shared/engine's SolveResult is assignable to this type; the
-// editor adds its own failure (a crashed worker) and its own safety checks (safetyChecks.ts).
+// "Results"): the editor's view of it, derived from shared/engine's types so the two cannot drift.
+// It is looser in three ways: the editor's own safety checks (safetyChecks.ts) add severities
+// 'info' and 'error'; a failure may be the editor's own (a crashed worker), with any error code;
+// and fields the screens do not read (strategy, conditions) are left out, so results from older
+// workers or saved reports still fit. shared/engine's SolveResult is assignable to this type.
+import type { PartResult as EnginePartResult, SolveSuccess as EngineSuccess, SolveWarning as EngineWarning } from '../../../shared/engine/result';
 
-export type WarningSeverity = 'info' | 'caution' | 'warning' | 'danger' | 'error';
+export type WarningSeverity = EngineWarning['severity'] | 'info' | 'error';
 
 /** A structured finding about the circuit: what, where, how bad. */
-export interface SolveWarning {
-  code: string;
+export interface SolveWarning extends Omit<EngineWarning, 'severity'> {
   severity: WarningSeverity | string;
-  partId?: string;
-  net?: string;
-  message: string;
 }
 
-export interface PartResult {
-  /** current INTO the part at each pin, A */
-  pinCurrents: Record<string, number>;
-  /** power absorbed, W (negative when the part delivers power) */
-  power: number;
+export interface PartResult extends Omit<EnginePartResult, 'warnings'> {
   warnings: SolveWarning[];
-  /** operating quantities the engine reports (resistance at temperature, transistor region, …) */
-  derived?: Record<string, number | string>;
 }
 
-export interface SolveSuccess {
-  ok: true;
-  analysis: 'operating-point';
-  /** net name → V against the reference net "0" */
-  nets: Record<string, number>;
-  /** "R1.a" → V */
-  pins: Record<string, number>;
+export interface SolveSuccess extends Pick<EngineSuccess, 'ok' | 'analysis' | 'nets' | 'pins' | 'iterations'> {
   parts: Record<string, PartResult>;
   warnings: SolveWarning[];
-  iterations: number;
 }
 
 export interface SolveFailure {
