@@ -5,25 +5,22 @@
 import fs from 'node:fs';
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Download, Page } from 'playwright-core';
-import { launchBrowser, startBrowserServer, watchPage, type BrowserServer, type PageProblems } from '../support/browser';
+import type { Download } from 'playwright-core';
+import { openScreen, type Screen } from '../support/browser';
 
-let server: BrowserServer;
-let browser: Browser;
-let page: Page;
-let problems: PageProblems;
+let screen: Screen;
+let server: Screen['server'];
+let page: Screen['page'];
+let problems: Screen['problems'];
 
 beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchBrowser();
-  page = await (await browser.newContext({ viewport: { width: 1440, height: 900 }, acceptDownloads: true })).newPage();
-  problems = watchPage(page);
+  screen = await openScreen({ viewport: { width: 1440, height: 900 }, acceptDownloads: true });
+  ({ server, page, problems } = screen);
   await page.goto(`${server.baseUrl}/sheets/example-battery-divider`);
   await page.getByTestId('panel-tab-analyse').click();
 });
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  await screen?.close();
 });
 
 async function downloaded(click: () => Promise<void>): Promise<{ name: string; text: string }> {

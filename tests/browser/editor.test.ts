@@ -2,23 +2,19 @@
 // place a divider from the palette, wire it pin to pin, read the tap voltage on the canvas;
 // drag a potentiometer's slider and watch a reading move; cautions select their part.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, startBrowserServer, watchPage, type BrowserServer, type PageProblems } from '../support/browser';
+import { openScreen, type Screen } from '../support/browser';
 
-let server: BrowserServer;
-let browser: Browser;
-let page: Page;
-let problems: PageProblems;
+let screen: Screen;
+let server: Screen['server'];
+let page: Screen['page'];
+let problems: Screen['problems'];
 
 beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchBrowser();
-  page = await (await browser.newContext({ viewport: { width: 1440, height: 900 } })).newPage();
-  problems = watchPage(page);
+  screen = await openScreen({ viewport: { width: 1440, height: 900 } });
+  ({ server, page, problems } = screen);
 });
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  await screen?.close();
 });
 
 async function centre(testId: string): Promise<{ x: number; y: number }> {

@@ -3,23 +3,20 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, signInPage, startBrowserServer, watchPage, type BrowserServer, type PageProblems } from '../support/browser';
+import { openScreen, signInPage, watchPage, type Screen } from '../support/browser';
 
-let server: BrowserServer;
-let browser: Browser;
-let page: Page;
-let problems: PageProblems;
+let screen: Screen;
+let server: Screen['server'];
+let browser: Screen['browser'];
+let page: Screen['page'];
+let problems: Screen['problems'];
 
 beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchBrowser();
-  page = await (await browser.newContext({ viewport: { width: 1400, height: 900 } })).newPage();
-  problems = watchPage(page);
+  screen = await openScreen({ viewport: { width: 1400, height: 900 } });
+  ({ server, browser, page, problems } = screen);
 });
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  await screen?.close();
 });
 
 const projectJson = (id: string) => page.evaluate(async (pid) => (await fetch(`/api/projects/${pid}`)).json(), id);

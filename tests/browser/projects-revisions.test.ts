@@ -1,24 +1,20 @@
 // Revisions in the browser: save a named revision on the settings page, change the sheet, view the
 // revision read-only in the editor, restore it, and see the restore recorded in the list.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, signInPage, startBrowserServer, watchPage, type BrowserServer, type PageProblems } from '../support/browser';
+import { openScreen, signInPage, type Screen } from '../support/browser';
 
-let server: BrowserServer;
-let browser: Browser;
-let page: Page;
-let problems: PageProblems;
+let screen: Screen;
+let server: Screen['server'];
+let page: Screen['page'];
+let problems: Screen['problems'];
 
 beforeAll(async () => {
-  server = await startBrowserServer();
-  browser = await launchBrowser();
-  page = await (await browser.newContext({ viewport: { width: 1400, height: 900 } })).newPage();
+  screen = await openScreen({ viewport: { width: 1400, height: 900 } });
+  ({ server, page, problems } = screen);
   page.on('dialog', (d) => void d.accept()); // the restore and leave buttons ask first
-  problems = watchPage(page);
 });
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
+  await screen?.close();
 });
 
 const api = (path: string) => page.evaluate(async (p) => (await fetch(p)).json(), path);

@@ -6,7 +6,7 @@ import http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContextOptions, type Page } from 'playwright-core';
 import { desc } from 'drizzle-orm';
 import { createApp, sessionHandlersOf } from '../../server/app';
 import { attachRealtime } from '../../server/realtime/attach';
@@ -63,6 +63,36 @@ export async function startBrowserServer(env: Record<string, string> = {}): Prom
       await mail?.close();
       await t.drop();
       fs.rmSync(clientDir, { recursive: true, force: true });
+    },
+  };
+}
+
+export interface Screen {
+  server: BrowserServer;
+  browser: Browser;
+  /** one page in a context of its own, watched for errors (`problems`) */
+  page: Page;
+  problems: PageProblems;
+  /** closes the browser, then the app and its database */
+  close(): Promise<void>;
+}
+
+/**
+ * The usual set-up of a screen test, for its beforeAll: the whole app (startBrowserServer),
+ * Debian's Chromium and one watched page in a context with `context` options.
+ */
+export async function openScreen(context: BrowserContextOptions = {}, env: Record<string, string> = {}): Promise<Screen> {
+  const server = await startBrowserServer(env);
+  const browser = await launchBrowser();
+  const page = await (await browser.newContext(context)).newPage();
+  return {
+    server,
+    browser,
+    page,
+    problems: watchPage(page),
+    async close() {
+      await browser.close();
+      await server.close();
     },
   };
 }
