@@ -453,7 +453,6 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     const i = base.index.get(id);
     return i === undefined ? undefined : sheet.parts[i];
   };
-  const byId = { get: partOf };
   const deviceOf = (inst: Instance, id: string): Device | undefined => {
     const i = base.index.get(id);
     const pos = i === undefined ? -1 : inst.devicePos[i];
@@ -480,7 +479,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     if (hasOverrides) {
       const issues: SheetIssue[] = [];
       for (const [id, ov] of Object.entries(overrides!)) {
-        const part = byId.get(id);
+        const part = partOf(id);
         if (!part) {
           issues.push({ path: `paramOverrides.${id}`, partId: id, message: `paramOverrides: there is no part "${id}" on the sheet.` });
           continue;
@@ -505,7 +504,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     }
     const paramsOf = (p: Part) => merged.get(p.id) ?? (p.params as Record<string, unknown>);
     if (baseInst.ok) {
-      const changed = condChanged ? base.solved : [...merged.keys()].map((id) => byId.get(id)!);
+      const changed = condChanged ? base.solved : [...merged.keys()].map((id) => partOf(id)!);
       const patched = patchInstance(base, baseInst.inst, changed, paramsOf, cond, opts);
       if (patched && !patched.ok) return failure(patched.error, base.staticWarnings);
       if (patched) return { inst: patched.inst, cond };
@@ -580,7 +579,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     return u < 0 ? 0 : l.x[u];
   };
   const partCurrents = (l: NonNullable<typeof last>, partId: string): number[] => {
-    const part = byId.get(partId);
+    const part = partOf(partId);
     if (!part) throw new Error(`no part ${partId}`);
     const dev = deviceOf(l.inst, partId);
     return dev ? dev.pinCurrents(l.x, l.gmin) : partCatalog[part.type].pins.map(() => 0);
@@ -607,7 +606,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     },
     pinCurrent(partId, pin) {
       const l = needLast();
-      const part = byId.get(partId);
+      const part = partOf(partId);
       if (!part) throw new Error(`no part ${partId}`);
       const k = partCatalog[part.type].pins.findIndex((p) => p.name === pin);
       if (k < 0) throw new Error(`no pin ${partId}.${pin}`);
@@ -631,18 +630,18 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
             return n === undefined ? undefined : base.netUnknown[n.index];
           },
           device(partId) {
-            const part = byId.get(partId);
+            const part = partOf(partId);
             const device = deviceOf(inst, partId);
             if (!part || !device) return undefined;
             return { device, pins: pinsOf(part), pinNames: partCatalog[part.type].pins.map((p) => p.name) };
           },
           paramValue(partId, param) {
-            const part = byId.get(partId);
+            const part = partOf(partId);
             const v = part ? inst.paramsOf(part)[param] : undefined;
             return typeof v === 'number' && deviceOf(inst, partId) ? v : undefined;
           },
           perturbed(partId, param, value) {
-            const part = byId.get(partId)!;
+            const part = partOf(partId)!;
             const def = partCatalog[part.type];
             const info = def.params.find((p) => p.name === param);
             const next = { ...inst.paramsOf(part), [param]: value };
@@ -668,7 +667,7 @@ function compileInner(input: unknown, opts: typeof DEFAULTS): CompiledCircuit {
     },
     partPower(partId) {
       const l = needLast();
-      const part = byId.get(partId)!;
+      const part = partOf(partId)!;
       const cur = partCurrents(l, partId);
       let p = 0;
       partCatalog[part.type].pins.forEach((pin, k) => (p += pinVoltageOf(l, partId, pin.name) * cur[k]));
